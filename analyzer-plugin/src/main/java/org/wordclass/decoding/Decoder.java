@@ -1,0 +1,437 @@
+package org.wordclass.decoding;
+
+import java.util.Arrays;
+import org.wordclass.model.HmmModel;
+
+/**
+ * Exact decoding of a {@link Lattice} under a first- or second-order HMM: Viterbi for the most
+ * probable tag sequence, forward-backward for the posterior probability of each candidate tag
+ * (the confidence of a tagging). Both respect the lexicon constraint and are exact under it.
+ *
+ * <p>Cost per token with K candidates per token: Viterbi O(K^2) at order 1 and O(K^3) at order
+ * 2; forward-backward about twice that. Memory is O(n K^2) for n tokens, in buffers that are
+ * kept and reused, so steady-state decoding allocates nothing. Forward-backward runs in linear
+ * space with one scale factor per token, so long sequences do not underflow.
+ *
+ * <p>Not thread-safe: one per thread; the model it reads is shared.
+ */
+public final class Decoder {
+  private final HmmModel model;
+  private final int order;
+  private final Lattice lattice;
+  private final int states;
+  private final int boundary;
+  private final double[] logBigram;
+  private final double[] logTrigram;
+  private final double[] bigram;
+  private final double[] trigram;
+
+  private int[] stateStart = new int[65];
+  private double[] score = new double[1024];
+  private int[] backPointer = new int[1024];
+  private double[] alpha = new double[1024];
+  private double[] beta = new double[1024];
+  private double[] scaledEmission = new double[256];
+  private double[] posterior = new double[256];
+  private double bestLogProbability;
+  private double maxEmissionSum;
+
+  /** A decoder of the order the model was trained for. */
+  public Decoder(HmmModel model) {
+    this(model, model.order());
+  }
+
+  public Decoder(HmmModel model, int order) {
+    if (order != 1 && order != 2) {
+      throw new IllegalArgumentException("order must be 1 or 2, not " + order);
+    }
+    this.model = model;
+    this.order = order;
+    this.lattice = new Lattice(model);
+    this.states = model.tags().size() + 1;
+    this.boundary = model.boundary();
+    this.logBigram = model.logBigramTable();
+    this.logTrigram = model.logTrigramTable();
+    this.bigram = model.bigramTable();
+    this.trigram = model.trigramTable();
+  }
+
+  public HmmModel model() {
+    return model;
+  }
+
+  public int order() {
+    return order;
+  }
+
+  /** The tokens to decode; fill it, then call {@link #viterbi} or {@link #forwardBackward}. */
+  public Lattice lattice() {
+    return lattice;
+  }
+
+  /** Candidates of a position, with the virtual boundary positions -1 and -2 holding one. */
+  private int count(int position) {
+    return position < 0 ? 1 : lattice.candidateCount(position);
+  }
+
+  private int tagAt(int position, int k) {
+    return position < 0 ? boundary : lattice.candidateTag(position, k);
+  }
+
+  private double logEmission(int position, int k) {
+    return lattice.candidateLogEmission(position, k);
+  }
+
+  /** Lays out one state per (previous candidate, candidate) pair (order 2) or per candidate (order 1). */
+  private int layOutStates() {
+    int n = lattice.size();
+    if (stateStart.length < n + 1) {
+      stateStart = new int[Math.max(n + 1, stateStart.length * 2)];
+    }
+    int total = 0;
+    for (int i = 0; i < n; i++) {
+      stateStart[i] = total;
+      total += order == 2 ? count(i - 1) * count(i) : count(i);
+    }
+    stateStart[n] = total;
+    if (score.length < total) {
+      int grown = Math.max(total, score.length * 2);
+      score = new double[grown];
+      backPointer = new int[grown];
+      alpha = new double[grown];
+      beta = new double[grown];
+    }
+    int candidates = lattice.totalCandidates();
+    if (posterior.length < candidates) {
+      int grown = Math.max(candidates, posterior.length * 2);
+      posterior = new double[grown];
+      scaledEmission = new double[grown];
+    }
+    return total;
+  }
+
+  /**
+   * Finds the most probable tag sequence.
+   *
+   * @param best receives, per position, the index of the chosen candidate (see {@link
+   *     Lattice#candidateTag}); at least {@code lattice().size()} long
+   */
+  public void viterbi(int[] best) {
+    int n = lattice.size();
+    if (n == 0) {
+      bestLogProbability = Math.log(bigram[boundary * states + boundary]);
+      return;
+    }
+    layOutStates();
+    if (order == 2) {
+      viterbiSecondOrder(best, n);
+    } else {
+      viterbiFirstOrder(best, n);
+    }
+  }
+
+  /** Log joint probability of the sequence found by the last {@link #viterbi} call. */
+  public double bestLogProbability() {
+    return bestLogProbability;
+  }
+
+  private void viterbiFirstOrder(int[] best, int n) {
+    for (int i = 0; i < n; i++) {
+      int kp = count(i - 1);
+      int kc = count(i);
+      int here = stateStart[i];
+      int prev = i == 0 ? 0 : stateStart[i - 1];
+      for (int k = 0; k < kc; k++) {
+        int tk = tagAt(i, k);
+        double top = Double.NEGATIVE_INFINITY;
+        int arg = 0;
+        for (int j = 0; j < kp; j++) {
+          double s = (i == 0 ? 0 : score[prev + j]) + logBigram[tagAt(i - 1, j) * states + tk];
+          if (s > top) {
+            top = s;
+            arg = j;
+          }
+        }
+        score[here + k] = top + logEmission(i, k);
+        backPointer[here + k] = arg;
+      }
+    }
+    int last = stateStart[n - 1];
+    double top = Double.NEGATIVE_INFINITY;
+    int arg = 0;
+    for (int k = 0; k < count(n - 1); k++) {
+      double s = score[last + k] + logBigram[tagAt(n - 1, k) * states + boundary];
+      if (s > top) {
+        top = s;
+        arg = k;
+      }
+    }
+    bestLogProbability = top;
+    for (int i = n - 1; i >= 0; i--) {
+      best[i] = arg;
+      arg = backPointer[stateStart[i] + arg];
+    }
+  }
+
+  private void viterbiSecondOrder(int[] best, int n) {
+    for (int i = 0; i < n; i++) {
+      int kpp = count(i - 2);
+      int kp = count(i - 1);
+      int kc = count(i);
+      int here = stateStart[i];
+      int prev = i == 0 ? 0 : stateStart[i - 1];
+      for (int j = 0; j < kp; j++) {
+        int tj = tagAt(i - 1, j);
+        for (int k = 0; k < kc; k++) {
+          int tk = tagAt(i, k);
+          double top = Double.NEGATIVE_INFINITY;
+          int arg = 0;
+          for (int h = 0; h < kpp; h++) {
+            double s = (i == 0 ? 0 : score[prev + h * kp + j])
+                + logTrigram[(tagAt(i - 2, h) * states + tj) * states + tk];
+            if (s > top) {
+              top = s;
+              arg = h;
+            }
+          }
+          score[here + j * kc + k] = top + logEmission(i, k);
+          backPointer[here + j * kc + k] = arg;
+        }
+      }
+    }
+    int kp = count(n - 2);
+    int kc = count(n - 1);
+    int last = stateStart[n - 1];
+    double top = Double.NEGATIVE_INFINITY;
+    int argJ = 0;
+    int argK = 0;
+    for (int j = 0; j < kp; j++) {
+      for (int k = 0; k < kc; k++) {
+        double s = score[last + j * kc + k] + logTrigram[(tagAt(n - 2, j) * states + tagAt(n - 1, k)) * states + boundary];
+        if (s > top) {
+          top = s;
+          argJ = j;
+          argK = k;
+        }
+      }
+    }
+    bestLogProbability = top;
+    int j = argJ;
+    int k = argK;
+    for (int i = n - 1; i >= 0; i--) {
+      best[i] = k;
+      int h = backPointer[stateStart[i] + j * count(i) + k];
+      k = j;
+      j = h;
+    }
+  }
+
+  /**
+   * Computes the posterior probability of every candidate of every token given the whole
+   * sequence; read them with {@link #posterior}.
+   *
+   * @return the log-probability of the token sequence under the model, summed over all taggings
+   *     (up to the constant that the unknown-word model leaves out)
+   */
+  public double forwardBackward() {
+    int n = lattice.size();
+    if (n == 0) {
+      return Math.log(bigram[boundary * states + boundary]);
+    }
+    layOutStates();
+    scaleEmissions(n);
+    double logLikelihood = order == 2 ? forwardBackwardSecondOrder(n) : forwardBackwardFirstOrder(n);
+    for (int i = 0; i < n; i++) {
+      int base = lattice.candidateOffset(i);
+      double sum = 0;
+      for (int k = 0; k < count(i); k++) {
+        sum += posterior[base + k];
+      }
+      for (int k = 0; k < count(i); k++) {
+        posterior[base + k] /= sum;
+      }
+    }
+    return logLikelihood;
+  }
+
+  /** Posterior probability of the {@code k}-th candidate of token {@code position}. */
+  public double posterior(int position, int k) {
+    return posterior[lattice.candidateOffset(position) + k];
+  }
+
+  /** Stores exp(emission - max emission of the token), and the sum of the maxima for the likelihood. */
+  private void scaleEmissions(int n) {
+    maxEmissionSum = 0;
+    for (int i = 0; i < n; i++) {
+      int base = lattice.candidateOffset(i);
+      double max = Double.NEGATIVE_INFINITY;
+      for (int k = 0; k < count(i); k++) {
+        max = Math.max(max, logEmission(i, k));
+      }
+      for (int k = 0; k < count(i); k++) {
+        scaledEmission[base + k] = Math.exp(logEmission(i, k) - max);
+      }
+      maxEmissionSum += max;
+    }
+  }
+
+  private double forwardBackwardFirstOrder(int n) {
+    double logScale = maxEmissionSum;
+    for (int i = 0; i < n; i++) {
+      int kp = count(i - 1);
+      int here = stateStart[i];
+      int prev = i == 0 ? 0 : stateStart[i - 1];
+      int emit = lattice.candidateOffset(i);
+      double sum = 0;
+      for (int k = 0; k < count(i); k++) {
+        int tk = tagAt(i, k);
+        double a = 0;
+        for (int j = 0; j < kp; j++) {
+          a += (i == 0 ? 1 : alpha[prev + j]) * bigram[tagAt(i - 1, j) * states + tk];
+        }
+        a *= scaledEmission[emit + k];
+        alpha[here + k] = a;
+        sum += a;
+      }
+      logScale += normalize(alpha, here, count(i), sum);
+    }
+    int last = stateStart[n - 1];
+    double end = 0;
+    double sum = 0;
+    for (int k = 0; k < count(n - 1); k++) {
+      double b = bigram[tagAt(n - 1, k) * states + boundary];
+      beta[last + k] = b;
+      end += alpha[last + k] * b;
+      sum += b;
+    }
+    normalize(beta, last, count(n - 1), sum);
+    for (int i = n - 2; i >= 0; i--) {
+      int here = stateStart[i];
+      int next = stateStart[i + 1];
+      int emit = lattice.candidateOffset(i + 1);
+      sum = 0;
+      for (int j = 0; j < count(i); j++) {
+        int tj = tagAt(i, j);
+        double b = 0;
+        for (int k = 0; k < count(i + 1); k++) {
+          b += bigram[tj * states + tagAt(i + 1, k)] * scaledEmission[emit + k] * beta[next + k];
+        }
+        beta[here + j] = b;
+        sum += b;
+      }
+      normalize(beta, here, count(i), sum);
+    }
+    for (int i = 0; i < n; i++) {
+      int here = stateStart[i];
+      int base = lattice.candidateOffset(i);
+      for (int k = 0; k < count(i); k++) {
+        posterior[base + k] = alpha[here + k] * beta[here + k];
+      }
+    }
+    return logScale + Math.log(end);
+  }
+
+  private double forwardBackwardSecondOrder(int n) {
+    double logScale = maxEmissionSum;
+    for (int i = 0; i < n; i++) {
+      int kpp = count(i - 2);
+      int kp = count(i - 1);
+      int kc = count(i);
+      int here = stateStart[i];
+      int prev = i == 0 ? 0 : stateStart[i - 1];
+      int emit = lattice.candidateOffset(i);
+      double sum = 0;
+      for (int j = 0; j < kp; j++) {
+        int tj = tagAt(i - 1, j);
+        for (int k = 0; k < kc; k++) {
+          int tk = tagAt(i, k);
+          double a = 0;
+          for (int h = 0; h < kpp; h++) {
+            a += (i == 0 ? 1 : alpha[prev + h * kp + j]) * trigram[(tagAt(i - 2, h) * states + tj) * states + tk];
+          }
+          a *= scaledEmission[emit + k];
+          alpha[here + j * kc + k] = a;
+          sum += a;
+        }
+      }
+      logScale += normalize(alpha, here, kp * kc, sum);
+    }
+    int kp = count(n - 2);
+    int kc = count(n - 1);
+    int last = stateStart[n - 1];
+    double end = 0;
+    double sum = 0;
+    for (int j = 0; j < kp; j++) {
+      for (int k = 0; k < kc; k++) {
+        double b = trigram[(tagAt(n - 2, j) * states + tagAt(n - 1, k)) * states + boundary];
+        beta[last + j * kc + k] = b;
+        end += alpha[last + j * kc + k] * b;
+        sum += b;
+      }
+    }
+    normalize(beta, last, kp * kc, sum);
+    for (int i = n - 2; i >= 0; i--) {
+      // state (h at i-1, j at i) continues to (j at i, k at i+1)
+      int kh = count(i - 1);
+      int kj = count(i);
+      int kk = count(i + 1);
+      int here = stateStart[i];
+      int next = stateStart[i + 1];
+      int emit = lattice.candidateOffset(i + 1);
+      sum = 0;
+      for (int h = 0; h < kh; h++) {
+        int th = tagAt(i - 1, h);
+        for (int j = 0; j < kj; j++) {
+          int base = (th * states + tagAt(i, j)) * states;
+          double b = 0;
+          for (int k = 0; k < kk; k++) {
+            b += trigram[base + tagAt(i + 1, k)] * scaledEmission[emit + k] * beta[next + j * kk + k];
+          }
+          beta[here + h * kj + j] = b;
+          sum += b;
+        }
+      }
+      normalize(beta, here, kh * kj, sum);
+    }
+    for (int i = 0; i < n; i++) {
+      int kpI = count(i - 1);
+      int kcI = count(i);
+      int here = stateStart[i];
+      int base = lattice.candidateOffset(i);
+      for (int k = 0; k < kcI; k++) {
+        double p = 0;
+        for (int j = 0; j < kpI; j++) {
+          p += alpha[here + j * kcI + k] * beta[here + j * kcI + k];
+        }
+        posterior[base + k] = p;
+      }
+    }
+    return logScale + Math.log(end);
+  }
+
+  /** Divides {@code values[from..from+count)} by {@code sum}; returns log(sum). */
+  private static double normalize(double[] values, int from, int count, double sum) {
+    if (sum > 0) {
+      double inv = 1.0 / sum;
+      for (int i = from; i < from + count; i++) {
+        values[i] *= inv;
+      }
+      return Math.log(sum);
+    }
+    return Double.NEGATIVE_INFINITY;
+  }
+
+  /** Tag indexes of the candidates in {@code best}, for convenience outside hot paths. */
+  public int[] tagsOf(int[] best) {
+    int[] tags = new int[lattice.size()];
+    for (int i = 0; i < tags.length; i++) {
+      tags[i] = lattice.candidateTag(i, best[i]);
+    }
+    return tags;
+  }
+
+  /** Grows {@code array} to hold {@code size} entries. */
+  public static int[] ensureCapacity(int[] array, int size) {
+    return array.length >= size ? array : Arrays.copyOf(array, Math.max(size, array.length * 2));
+  }
+}

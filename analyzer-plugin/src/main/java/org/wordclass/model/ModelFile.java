@@ -1,0 +1,366 @@
+package org.wordclass.model;
+
+import java.io.IOException;
+import java.io.InputStream;
+import java.io.OutputStream;
+import java.nio.ByteBuffer;
+import java.nio.file.AtomicMoveNotSupportedException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.nio.file.StandardCopyOption;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Map;
+import java.util.TreeMap;
+import org.apache.lucene.codecs.CodecUtil;
+import org.apache.lucene.index.CorruptIndexException;
+import org.apache.lucene.index.IndexFormatTooNewException;
+import org.apache.lucene.index.IndexFormatTooOldException;
+import org.apache.lucene.store.BufferedChecksumIndexInput;
+import org.apache.lucene.store.ByteBuffersDataInput;
+import org.apache.lucene.store.ByteBuffersIndexInput;
+import org.apache.lucene.store.ChecksumIndexInput;
+import org.apache.lucene.store.DataInput;
+import org.apache.lucene.store.DataOutput;
+import org.apache.lucene.store.IndexInput;
+import org.apache.lucene.store.IndexOutput;
+import org.apache.lucene.store.OutputStreamIndexOutput;
+
+/**
+ * Reads and writes the model file format ({@code .wcm}), described in {@code docs/model-format.md}:
+ * a Lucene {@link CodecUtil} header naming the format and its version, the provenance block,
+ * the tag set, the transition tables, the lexicon and the unknown-word model, then a footer with
+ * a CRC-32 checksum of everything before it.
+ *
+ * <p>Loading verifies the header first (so a foreign or newer file is named as such), then the
+ * checksum of the whole file (so a changed or truncated byte is caught before any parsing), then
+ * parses with every declared size checked against the bytes that remain, so a crafted header
+ * cannot make the loader allocate more than the file could hold. Writing is deterministic (no
+ * timestamps; maps in key order) and goes through a temporary file that is moved into place, so
+ * a crash never leaves a half-written model.
+ */
+public final class ModelFile {
+  /** Codec name in the header; a file with another name is not a model of ours. */
+  public static final String CODEC = "WordClassHmm";
+
+  public static final int VERSION_START = 1;
+  public static final int VERSION_CURRENT = VERSION_START;
+
+  /** Largest model file this reader accepts, a guard against reading a wrong file whole. */
+  public static final long MAX_FILE_BYTES = 1L << 30;
+
+  private ModelFile() {}
+
+  /** Writes {@code model} to {@code target} atomically (temporary file, then move). */
+  public static void write(HmmModel model, Path target) throws IOException {
+    Path dir = target.toAbsolutePath().getParent();
+    Files.createDirectories(dir);
+    Path tmp = Files.createTempFile(dir, target.getFileName().toString(), ".tmp");
+    try {
+      try (OutputStream stream = Files.newOutputStream(tmp);
+          IndexOutput out = new OutputStreamIndexOutput(target.toString(), target.getFileName().toString(), stream, 1 << 16)) {
+        write(model, out);
+      }
+      try {
+        Files.move(tmp, target, StandardCopyOption.REPLACE_EXISTING, StandardCopyOption.ATOMIC_MOVE);
+      } catch (AtomicMoveNotSupportedException e) {
+        Files.move(tmp, target, StandardCopyOption.REPLACE_EXISTING);
+      }
+    } finally {
+      Files.deleteIfExists(tmp);
+    }
+  }
+
+  /** Writes {@code model} to {@code out}, header to footer. */
+  public static void write(HmmModel model, IndexOutput out) throws IOException {
+    CodecUtil.writeHeader(out, CODEC, VERSION_CURRENT);
+    writeMap(out, model.provenance());
+    out.writeByte((byte) model.order());
+    TagSet tags = model.tags();
+    out.writeVInt(tags.size());
+    for (String name : tags.names()) {
+      out.writeString(name);
+    }
+    writeDoubles(out, model.logBigramTable());
+    writeDoubles(out, model.logTrigramTable());
+    writeLexicon(out, model.lexicon());
+    writeUnknownWords(out, model.unknownWords(), tags.size());
+    CodecUtil.writeFooter(out);
+  }
+
+  private static void writeMap(DataOutput out, Map<String, String> map) throws IOException {
+    out.writeVInt(map.size());
+    for (Map.Entry<String, String> e : new TreeMap<>(map).entrySet()) {
+      out.writeString(e.getKey());
+      out.writeString(e.getValue());
+    }
+  }
+
+  private static void writeDoubles(DataOutput out, double[] values) throws IOException {
+    for (double v : values) {
+      out.writeLong(Double.doubleToLongBits(v));
+    }
+  }
+
+  private static void writeLexicon(DataOutput out, Lexicon lexicon) throws IOException {
+    out.writeVInt(lexicon.size());
+    for (int w = 0; w < lexicon.size(); w++) {
+      out.writeString(lexicon.word(w));
+      out.writeVInt(lexicon.tagCount(w));
+      for (int k = 0; k < lexicon.tagCount(w); k++) {
+        out.writeVInt(lexicon.tag(w, k));
+        out.writeInt(Float.floatToIntBits(lexicon.logEmission(w, k)));
+      }
+    }
+  }
+
+  private static void writeUnknownWords(DataOutput out, UnknownWordModel model, int tagCount) throws IOException {
+    out.writeLong(Double.doubleToLongBits(model.theta()));
+    out.writeVInt(model.maxSuffixLength());
+    int[] open = model.openTags();
+    out.writeVInt(open.length);
+    for (int t : open) {
+      out.writeVInt(t);
+    }
+    writeDoubles(out, model.logPrior());
+    writeDoubles(out, model.baseDistribution());
+    for (int t : model.trieOfShape()) {
+      out.writeVInt(t);
+    }
+    out.writeVInt(model.tries().length);
+    for (SuffixTrie trie : model.tries()) {
+      writeTrie(out, trie);
+    }
+  }
+
+  private static void writeTrie(DataOutput out, SuffixTrie trie) throws IOException {
+    int nodes = trie.nodeCount();
+    out.writeVInt(nodes);
+    for (int n = 0; n < nodes; n++) {
+      out.writeVInt(trie.countStart[n + 1] - trie.countStart[n]);
+      for (int i = trie.countStart[n]; i < trie.countStart[n + 1]; i++) {
+        out.writeVInt(trie.countTag[i]);
+        out.writeVInt(trie.countValue[i]);
+      }
+      out.writeVInt(trie.childStart[n + 1] - trie.childStart[n]);
+      for (int i = trie.childStart[n]; i < trie.childStart[n + 1]; i++) {
+        out.writeVInt(trie.childChar[i]);
+      }
+    }
+  }
+
+  /** Reads the model file at {@code path}. */
+  public static HmmModel read(Path path) throws IOException {
+    long size = Files.size(path);
+    if (size > MAX_FILE_BYTES) {
+      throw new ModelFormatException(path + ": " + size + " bytes is larger than any model (" + MAX_FILE_BYTES + ")");
+    }
+    return read(Files.readAllBytes(path), path.toString());
+  }
+
+  /** Reads a model from a stream, such as a resource of a jar or a Solr config set. */
+  public static HmmModel read(InputStream stream, String name) throws IOException {
+    byte[] bytes = stream.readNBytes((int) MAX_FILE_BYTES + 1);
+    if (bytes.length > MAX_FILE_BYTES) {
+      throw new ModelFormatException(name + ": larger than any model (" + MAX_FILE_BYTES + " bytes)");
+    }
+    return read(bytes, name);
+  }
+
+  /** Reads a model held in memory; {@code name} appears in every error message. */
+  public static HmmModel read(byte[] bytes, String name) throws IOException {
+    IndexInput raw = new ByteBuffersIndexInput(new ByteBuffersDataInput(List.of(ByteBuffer.wrap(bytes))), name);
+    checkHeader(raw, name);
+    verifyChecksum(raw, name);
+    raw.seek(0);
+    ChecksumIndexInput in = new BufferedChecksumIndexInput(raw);
+    try {
+      int version = CodecUtil.checkHeader(in, CODEC, VERSION_START, VERSION_CURRENT);
+      HmmModel model = readBody(in, version, name);
+      CodecUtil.checkFooter(in);
+      return model;
+    } catch (CorruptIndexException | IllegalArgumentException | IndexOutOfBoundsException e) {
+      throw new ModelFormatException(name + ": the model file is inconsistent: " + e.getMessage(), e);
+    }
+  }
+
+  private static void checkHeader(IndexInput in, String name) throws IOException {
+    if (in.length() < CodecUtil.headerLength(CODEC)) {
+      throw new ModelFormatException(name + ": not a word-class model file (only " + in.length() + " bytes)");
+    }
+    try {
+      CodecUtil.checkHeader(in, CODEC, VERSION_START, VERSION_CURRENT);
+    } catch (IndexFormatTooNewException e) {
+      throw new ModelFormatException(
+          name + ": the model file has format version " + e.getVersion() + ", newer than this reader supports (versions "
+              + VERSION_START + " to " + VERSION_CURRENT + "); use a newer wordclass release", e);
+    } catch (IndexFormatTooOldException e) {
+      throw new ModelFormatException(
+          name + ": the model file has format version " + e.getVersion() + ", older than this reader supports (versions "
+              + VERSION_START + " to " + VERSION_CURRENT + "); rebuild the model", e);
+    } catch (CorruptIndexException e) {
+      throw new ModelFormatException(name + ": not a word-class model file (its header does not name the "
+          + CODEC + " format)", e);
+    }
+  }
+
+  private static void verifyChecksum(IndexInput in, String name) throws IOException {
+    try {
+      CodecUtil.checksumEntireFile(in);
+    } catch (CorruptIndexException e) {
+      throw new ModelFormatException(name + ": the model file is corrupt or truncated (checksum check failed: "
+          + e.getMessage() + ")", e);
+    }
+  }
+
+  private static HmmModel readBody(ChecksumIndexInput in, int version, String name) throws IOException {
+    Limits limits = new Limits(in, name);
+    Map<String, String> provenance = readMap(in, limits);
+    int order = in.readByte();
+    int tagCount = limits.count(in.readVInt(), 1, "tags");
+    List<String> names = new ArrayList<>(tagCount);
+    for (int i = 0; i < tagCount; i++) {
+      names.add(in.readString());
+    }
+    TagSet tags = new TagSet(names);
+    int states = tagCount + 1;
+    double[] logBigram = readDoubles(in, limits.count((long) states * states, 8, "bigram entries"));
+    double[] logTrigram = readDoubles(in, limits.count((long) states * states * states, 8, "trigram entries"));
+    Lexicon lexicon = readLexicon(in, limits, tagCount);
+    UnknownWordModel unknown = readUnknownWords(in, limits, tagCount);
+    return new HmmModel(order, tags, logBigram, logTrigram, lexicon, unknown, provenance);
+  }
+
+  /** Checks declared sizes against the bytes left in the file before anything is allocated. */
+  private record Limits(IndexInput in, String name) {
+    int count(long declared, int minBytesEach, String what) throws ModelFormatException {
+      long left = in.length() - in.getFilePointer();
+      if (declared < 0 || declared * minBytesEach > left) {
+        throw new ModelFormatException(name + ": the model file declares " + declared + " " + what
+            + " but only " + left + " bytes remain");
+      }
+      return (int) declared;
+    }
+  }
+
+  private static Map<String, String> readMap(DataInput in, Limits limits) throws IOException {
+    int size = limits.count(in.readVInt(), 2, "provenance entries");
+    Map<String, String> map = new TreeMap<>();
+    for (int i = 0; i < size; i++) {
+      map.put(in.readString(), in.readString());
+    }
+    return map;
+  }
+
+  private static double[] readDoubles(DataInput in, int count) throws IOException {
+    double[] values = new double[count];
+    for (int i = 0; i < count; i++) {
+      values[i] = Double.longBitsToDouble(in.readLong());
+    }
+    return values;
+  }
+
+  private static int tagIndex(int tag, int tagCount) throws CorruptIndexException {
+    if (tag < 0 || tag >= tagCount) {
+      throw new CorruptIndexException("tag index " + tag + " out of range", "model");
+    }
+    return tag;
+  }
+
+  private static Lexicon readLexicon(DataInput in, Limits limits, int tagCount) throws IOException {
+    int words = limits.count(in.readVInt(), 3, "lexicon words");
+    List<Lexicon.Entry> entries = new ArrayList<>(words);
+    for (int w = 0; w < words; w++) {
+      String word = in.readString();
+      int n = limits.count(in.readVInt(), 5, "tags of a word");
+      int[] wordTags = new int[n];
+      float[] emissions = new float[n];
+      for (int k = 0; k < n; k++) {
+        wordTags[k] = tagIndex(in.readVInt(), tagCount);
+        emissions[k] = Float.intBitsToFloat(in.readInt());
+      }
+      entries.add(new Lexicon.Entry(word, wordTags, emissions));
+    }
+    return new Lexicon(entries);
+  }
+
+  private static UnknownWordModel readUnknownWords(DataInput in, Limits limits, int tagCount) throws IOException {
+    double theta = Double.longBitsToDouble(in.readLong());
+    int maxSuffix = in.readVInt();
+    int openCount = limits.count(in.readVInt(), 1, "open tags");
+    int[] open = new int[openCount];
+    for (int i = 0; i < openCount; i++) {
+      open[i] = tagIndex(in.readVInt(), tagCount);
+    }
+    double[] logPrior = readDoubles(in, limits.count(tagCount, 8, "tag priors"));
+    double[] base = readDoubles(in, limits.count(openCount, 8, "open-tag probabilities"));
+    int[] trieOfShape = new int[WordShape.values().length];
+    for (int i = 0; i < trieOfShape.length; i++) {
+      trieOfShape[i] = in.readVInt();
+    }
+    int trieCount = limits.count(in.readVInt(), 1, "suffix tries");
+    SuffixTrie[] tries = new SuffixTrie[trieCount];
+    for (int i = 0; i < trieCount; i++) {
+      tries[i] = readTrie(in, limits, tagCount);
+    }
+    return new UnknownWordModel(theta, maxSuffix, open, logPrior, base, trieOfShape, tries);
+  }
+
+  private static SuffixTrie readTrie(DataInput in, Limits limits, int tagCount) throws IOException {
+    int nodes = limits.count(in.readVInt(), 2, "suffix nodes");
+    if (nodes < 1) {
+      throw new CorruptIndexException("a suffix trie needs a root", "model");
+    }
+    int[] childStart = new int[nodes + 1];
+    int[] countStart = new int[nodes + 1];
+    IntList countTags = new IntList();
+    IntList countValues = new IntList();
+    IntList chars = new IntList();
+    for (int n = 0; n < nodes; n++) {
+      countStart[n] = countTags.size;
+      int counts = limits.count(in.readVInt(), 2, "counts of a suffix");
+      for (int i = 0; i < counts; i++) {
+        countTags.add(tagIndex(in.readVInt(), tagCount));
+        countValues.add(in.readVInt());
+      }
+      childStart[n] = chars.size;
+      int children = limits.count(in.readVInt(), 1, "children of a suffix");
+      int previous = -1;
+      for (int i = 0; i < children; i++) {
+        int c = in.readVInt();
+        if (c <= previous || c > Character.MAX_VALUE) {
+          throw new CorruptIndexException("suffix characters out of order", "model");
+        }
+        chars.add(c);
+        previous = c;
+      }
+    }
+    countStart[nodes] = countTags.size;
+    childStart[nodes] = chars.size;
+    if (chars.size != nodes - 1) {
+      throw new CorruptIndexException("suffix trie with " + nodes + " nodes has " + chars.size + " edges", "model");
+    }
+    char[] childChar = new char[chars.size];
+    for (int i = 0; i < childChar.length; i++) {
+      childChar[i] = (char) chars.values[i];
+    }
+    short[] tagsOut = new short[countTags.size];
+    for (int i = 0; i < tagsOut.length; i++) {
+      tagsOut[i] = (short) countTags.values[i];
+    }
+    return new SuffixTrie(childStart, childChar, countStart, tagsOut, java.util.Arrays.copyOf(countValues.values, countValues.size));
+  }
+
+  /** Growable int array, so reading a trie does not box every number. */
+  private static final class IntList {
+    int[] values = new int[64];
+    int size;
+
+    void add(int v) {
+      if (size == values.length) {
+        values = java.util.Arrays.copyOf(values, size * 2);
+      }
+      values[size++] = v;
+    }
+  }
+}

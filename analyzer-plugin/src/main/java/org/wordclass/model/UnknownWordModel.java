@@ -1,0 +1,175 @@
+package org.wordclass.model;
+
+/**
+ * Emission scores for words the lexicon does not hold, from their endings and spelling shape, in
+ * the manner of Brants (2000), "TnT: a statistical part-of-speech tagger":
+ *
+ * <ul>
+ *   <li>tag distributions of word endings are counted over rare training words only, since
+ *       unknown words behave like rare ones;
+ *   <li>distributions of longer and shorter endings are combined by successive abstraction,
+ *       {@code P(t|l_{n-i+1..n}) = (P^(t|l_{n-i+1..n}) + θ P(t|l_{n-i+2..n})) / (1 + θ)};
+ *   <li>each spelling shape (see {@link WordShape}) keeps its own counts, abstracted in turn to
+ *       the distribution over all rare words;
+ *   <li>the result is inverted with Bayes' rule, {@code P(w|t) ∝ P(t|ending) / P(t)}; the
+ *       factor {@code P(ending)} is the same for every tag of a token and cancels in decoding.
+ * </ul>
+ *
+ * <p>Only open-class tags, those seen with rare words in training, are candidates. Scoring one
+ * word costs one trie step and one pass over the open tags per character of its ending and
+ * allocates nothing. Immutable and safe to share between threads.
+ */
+public final class UnknownWordModel {
+  private final double theta;
+  private final int maxSuffixLength;
+  private final int[] openTags;
+  private final double[] logPrior;
+  private final double[] baseDistribution;
+  private final int[] trieOfShape;
+  private final SuffixTrie[] tries;
+
+  /**
+   * @param theta weight of the shorter ending in successive abstraction
+   * @param maxSuffixLength longest ending consulted
+   * @param openTags tags an unknown word may take, ascending
+   * @param logPrior {@code log P(t)} over all training tokens, one per tag of the tag set
+   * @param baseDistribution tag distribution over all rare words, one per open tag, summing to 1
+   * @param trieOfShape index into {@code tries} for each {@link WordShape} ordinal
+   * @param tries ending counts, one trie per group of shapes
+   */
+  public UnknownWordModel(
+      double theta,
+      int maxSuffixLength,
+      int[] openTags,
+      double[] logPrior,
+      double[] baseDistribution,
+      int[] trieOfShape,
+      SuffixTrie[] tries) {
+    if (!(theta > 0) || Double.isInfinite(theta)) {
+      throw new IllegalArgumentException("suffix weight must be finite and positive: " + theta);
+    }
+    if (openTags.length == 0 || baseDistribution.length != openTags.length) {
+      throw new IllegalArgumentException("an unknown-word model needs one or more open tags");
+    }
+    if (trieOfShape.length != WordShape.values().length) {
+      throw new IllegalArgumentException("one trie index per word shape expected");
+    }
+    for (int t : trieOfShape) {
+      if (t < 0 || t >= tries.length) {
+        throw new IllegalArgumentException("trie index out of range: " + t);
+      }
+    }
+    for (int i = 0; i < openTags.length; i++) {
+      if (openTags[i] < 0 || openTags[i] >= logPrior.length || (i > 0 && openTags[i] <= openTags[i - 1])) {
+        throw new IllegalArgumentException("open tags must be distinct ascending tag indexes");
+      }
+      if (!(baseDistribution[i] > 0) || Double.isInfinite(logPrior[openTags[i]])) {
+        throw new IllegalArgumentException("open tag " + openTags[i] + " has no probability mass");
+      }
+    }
+    this.theta = theta;
+    this.maxSuffixLength = maxSuffixLength;
+    this.openTags = openTags.clone();
+    this.logPrior = logPrior.clone();
+    this.baseDistribution = baseDistribution.clone();
+    this.trieOfShape = trieOfShape.clone();
+    this.tries = tries.clone();
+  }
+
+  /** Number of candidate tags of every unknown word. */
+  public int openTagCount() {
+    return openTags.length;
+  }
+
+  /** The {@code k}-th open tag. */
+  public int openTag(int k) {
+    return openTags[k];
+  }
+
+  /**
+   * Writes {@code log P(word | openTag(k))}, up to a constant shared by all k, into {@code out[k]}.
+   *
+   * @param scratch at least {@link #openTagCount()} long; overwritten
+   * @return length of the longest ending that was found in the counts
+   */
+  public int logEmissions(char[] buf, int off, int len, double[] scratch, double[] out) {
+    SuffixTrie trie = tries[trieOfShape[WordShape.classify(buf, off, len).ordinal()]];
+    int k = openTags.length;
+    // the shape's own distribution, abstracted to the one over all rare words
+    System.arraycopy(baseDistribution, 0, out, 0, k);
+    abstractTo(trie, 0, out, scratch);
+    int node = 0;
+    int depth = 0;
+    while (depth < Math.min(len, maxSuffixLength)) {
+      int next = trie.child(node, buf[off + len - 1 - depth]);
+      if (next < 0) {
+        break;
+      }
+      node = next;
+      depth++;
+      abstractTo(trie, node, out, scratch);
+    }
+    for (int i = 0; i < k; i++) {
+      out[i] = Math.log(out[i]) - logPrior[openTags[i]];
+    }
+    return depth;
+  }
+
+  /** dist := (P^(t | node) + θ dist) / (1 + θ), over open tags. */
+  private void abstractTo(SuffixTrie trie, int node, double[] dist, double[] scratch) {
+    int k = openTags.length;
+    java.util.Arrays.fill(scratch, 0, k, 0.0);
+    long counted = 0;
+    for (int i = trie.countStart[node], end = trie.countStart[node + 1]; i < end; i++) {
+      int open = java.util.Arrays.binarySearch(openTags, trie.countTag[i]);
+      if (open >= 0) {
+        scratch[open] = trie.countValue[i];
+        counted += trie.countValue[i];
+      }
+    }
+    if (counted == 0) {
+      return;
+    }
+    double norm = 1.0 / (1.0 + theta);
+    for (int i = 0; i < k; i++) {
+      dist[i] = (scratch[i] / counted + theta * dist[i]) * norm;
+    }
+  }
+
+  public double theta() {
+    return theta;
+  }
+
+  public int maxSuffixLength() {
+    return maxSuffixLength;
+  }
+
+  int[] openTags() {
+    return openTags;
+  }
+
+  double[] logPrior() {
+    return logPrior;
+  }
+
+  double[] baseDistribution() {
+    return baseDistribution;
+  }
+
+  int[] trieOfShape() {
+    return trieOfShape;
+  }
+
+  SuffixTrie[] tries() {
+    return tries;
+  }
+
+  /** Approximate heap size in bytes. */
+  public long ramBytesUsed() {
+    long bytes = 16L * (openTags.length + logPrior.length);
+    for (SuffixTrie t : tries) {
+      bytes += 14L * t.nodeCount() + 6L * t.countTag.length;
+    }
+    return bytes;
+  }
+}

@@ -1,0 +1,105 @@
+package org.wordclass.corpus;
+
+import java.io.IOException;
+import java.io.UncheckedIOException;
+import java.nio.file.Path;
+import java.util.Iterator;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.NoSuchElementException;
+import java.util.function.Consumer;
+
+/**
+ * One or more corpus files read as one stream of sentences. Each iteration reads the files anew
+ * (nothing is held in memory), so a corpus can be passed over more than once.
+ */
+public final class Corpus implements Iterable<Sentence> {
+  private final List<Path> files;
+  private final CorpusFormat format;
+  private final TagColumn column;
+  private final Map<String, String> sha256 = new LinkedHashMap<>();
+
+  /**
+   * @param format the format of every file, or null to guess it from each file's name
+   */
+  public Corpus(List<Path> files, CorpusFormat format, TagColumn column) {
+    if (files.isEmpty()) {
+      throw new IllegalArgumentException("no corpus file given");
+    }
+    this.files = List.copyOf(files);
+    this.format = format;
+    this.column = column;
+  }
+
+  public List<Path> files() {
+    return files;
+  }
+
+  public TagColumn column() {
+    return column;
+  }
+
+  /** SHA-256 of each file by name, filled in once a pass has read it to the end. */
+  public Map<String, String> sha256ByFile() {
+    return sha256;
+  }
+
+  /** Reads every sentence of every file in order. */
+  public void forEachSentence(Consumer<Sentence> action) {
+    for (Sentence s : this) {
+      action.accept(s);
+    }
+  }
+
+  @Override
+  public Iterator<Sentence> iterator() {
+    return new Iterator<>() {
+      private int fileIndex = -1;
+      private SentenceReader reader;
+
+      @Override
+      public boolean hasNext() {
+        try {
+          while (reader == null || !reader.hasNext()) {
+            if (reader != null) {
+              sha256.put(files.get(fileIndex).getFileName().toString(), reader.sha256());
+              reader.close();
+              reader = null;
+            }
+            if (fileIndex + 1 >= files.size()) {
+              return false;
+            }
+            fileIndex++;
+            Path path = files.get(fileIndex);
+            reader = SentenceReader.open(path, format != null ? format : CorpusFormat.guess(path), column);
+          }
+          return true;
+        } catch (IOException e) {
+          throw new UncheckedIOException(e);
+        } catch (CorpusFormatException e) {
+          closeQuietly();
+          throw e;
+        }
+      }
+
+      private void closeQuietly() {
+        try {
+          if (reader != null) {
+            reader.close();
+          }
+        } catch (IOException ignored) {
+          // the format error is what the user needs to see
+        }
+      }
+
+      @Override
+      public Sentence next() {
+        if (!hasNext()) {
+          throw new NoSuchElementException();
+        }
+        return reader.next();
+      }
+    };
+  }
+}

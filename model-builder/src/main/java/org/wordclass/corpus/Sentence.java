@@ -1,0 +1,22 @@
+package org.wordclass.corpus;
+
+import java.util.List;
+
+/**
+ * One tagged sentence of a corpus.
+ *
+ * @param words the gold tokens (CoNLL-U syntactic words)
+ * @param tags one tag per word
+ * @param text the raw sentence text ({@code # text =} in CoNLL-U), or null if the file has none
+ * @param spaceAfter per word, whether a space follows it in the raw text ({@code SpaceAfter=No}
+ *     clears it; for a multiword token it is read from the token's range line)
+ * @param file name of the file the sentence came from
+ * @param line line number of the sentence's first line in that file
+ */
+public record Sentence(
+    List<String> words, List<String> tags, String text, boolean[] spaceAfter, String file, long line) {
+
+  public int size() {
+    return words.size();
+  }
+}

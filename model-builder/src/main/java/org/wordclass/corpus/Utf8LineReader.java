@@ -1,0 +1,126 @@
+package org.wordclass.corpus;
+
+import java.io.BufferedInputStream;
+import java.io.ByteArrayOutputStream;
+import java.io.Closeable;
+import java.io.IOException;
+import java.io.InputStream;
+import java.io.UncheckedIOException;
+import java.nio.ByteBuffer;
+import java.nio.charset.CharacterCodingException;
+import java.nio.charset.CharsetDecoder;
+import java.nio.charset.CodingErrorAction;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.security.DigestInputStream;
+import java.security.MessageDigest;
+import java.security.NoSuchAlgorithmException;
+import java.util.HexFormat;
+import java.util.zip.GZIPInputStream;
+
+/**
+ * Reads a text file line by line as strict UTF-8, decoding each line on its own so that a broken
+ * byte sequence is reported on the line that holds it. Files ending in {@code .gz} are
+ * decompressed on the fly. The SHA-256 of the bytes as stored is computed while reading, for the
+ * provenance of models built from the file.
+ */
+public final class Utf8LineReader implements Closeable {
+  private final String name;
+  private final InputStream in;
+  private final MessageDigest digest;
+  private final CharsetDecoder decoder = StandardCharsets.UTF_8.newDecoder()
+      .onMalformedInput(CodingErrorAction.REPORT)
+      .onUnmappableCharacter(CodingErrorAction.REPORT);
+  private final ByteArrayOutputStream line = new ByteArrayOutputStream(256);
+  private long lineNumber;
+  private boolean sawAnyByte;
+
+  public Utf8LineReader(Path path) throws IOException {
+    this.name = path.toString();
+    try {
+      this.digest = MessageDigest.getInstance("SHA-256");
+    } catch (NoSuchAlgorithmException e) {
+      throw new IllegalStateException("the Java runtime has no SHA-256", e);
+    }
+    InputStream raw = new DigestInputStream(new BufferedInputStream(Files.newInputStream(path), 1 << 16), digest);
+    if (path.getFileName().toString().endsWith(".gz")) {
+      try {
+        raw = new BufferedInputStream(new GZIPInputStream(raw, 1 << 16), 1 << 16);
+      } catch (IOException e) {
+        raw.close();
+        throw new CorpusFormatException(name, 0, "not a readable gzip file (" + e.getMessage() + ")");
+      }
+    }
+    this.in = raw;
+  }
+
+  public String name() {
+    return name;
+  }
+
+  /** Number of the line most recently returned (1-based). */
+  public long lineNumber() {
+    return lineNumber;
+  }
+
+  /** Whether the file had any byte at all. */
+  public boolean sawAnyByte() {
+    return sawAnyByte;
+  }
+
+  /** The next line without its line terminator, or null at the end of the file. */
+  public String readLine() {
+    line.reset();
+    try {
+      int b;
+      boolean any = false;
+      while ((b = in.read()) >= 0) {
+        any = true;
+        sawAnyByte = true;
+        if (b == '\n') {
+          break;
+        }
+        line.write(b);
+      }
+      if (!any) {
+        return null;
+      }
+    } catch (IOException e) {
+      throw new CorpusFormatException(name, lineNumber + 1, "cannot be read: " + e.getMessage());
+    }
+    lineNumber++;
+    byte[] bytes = line.toByteArray();
+    int length = bytes.length;
+    if (length > 0 && bytes[length - 1] == '\r') {
+      length--;
+    }
+    try {
+      String text = decoder.decode(ByteBuffer.wrap(bytes, 0, length)).toString();
+      if (lineNumber == 1 && text.startsWith("\uFEFF")) {
+        text = text.substring(1);
+      }
+      return text;
+    } catch (CharacterCodingException e) {
+      throw new CorpusFormatException(name, lineNumber, "is not valid UTF-8 (" + e.getClass().getSimpleName() + ")");
+    }
+  }
+
+  /** SHA-256 of the file's bytes as stored, valid once the whole file has been read. */
+  public String sha256() {
+    try {
+      // drain what a reader stopped short of, so the digest covers the whole file
+      while (in.read() >= 0) {
+        // keep reading
+      }
+    } catch (IOException e) {
+      throw new UncheckedIOException(e);
+    }
+    return HexFormat.of().formatHex(digest.digest());
+  }
+
+  @Override
+  public void close() throws IOException {
+    in.close();
+  }
+}

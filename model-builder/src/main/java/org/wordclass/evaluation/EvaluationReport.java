@@ -1,0 +1,95 @@
+package org.wordclass.evaluation;
+
+import java.util.ArrayList;
+import java.util.Comparator;
+import java.util.List;
+import java.util.Locale;
+
+/**
+ * The result of an evaluation, shaped for JSON output (Jackson serialises the record
+ * components): the top level holds {@code accuracy}, {@code knownAccuracy}, {@code
+ * unknownAccuracy} (fractions in 0..1) and {@code tokens}.
+ */
+public record EvaluationReport(
+    double accuracy,
+    double knownAccuracy,
+    double unknownAccuracy,
+    long tokens,
+    long knownTokens,
+    long unknownTokens,
+    long sentences,
+    double unknownShare,
+    double averageCandidatesPerToken,
+    double tokensPerSecond,
+    int order,
+    List<TagScore> perTag,
+    List<Confusion> topConfusions,
+    ConfusionMatrix confusionMatrix) {
+
+  /** Precision, recall and F1 of one tag; support is its number of gold tokens. */
+  public record TagScore(String tag, double precision, double recall, double f1, long support) {}
+
+  /** Gold tag taken for another, and how often. */
+  public record Confusion(String gold, String predicted, long count) {}
+
+  /** Rows are gold tags, columns predicted tags, in the order of {@code labels}. */
+  public record ConfusionMatrix(List<String> labels, long[][] counts) {}
+
+  static EvaluationReport of(Evaluation e) {
+    List<String> labels = e.labels();
+    long[][] m = e.confusion();
+    int n = labels.size();
+    List<TagScore> perTag = new ArrayList<>();
+    List<Confusion> confusions = new ArrayList<>();
+    for (int t = 0; t < n; t++) {
+      long tp = m[t][t];
+      long goldTotal = 0;
+      long predictedTotal = 0;
+      for (int o = 0; o < n; o++) {
+        goldTotal += m[t][o];
+        predictedTotal += m[o][t];
+        if (o != t && m[t][o] > 0) {
+          confusions.add(new Confusion(labels.get(t), labels.get(o), m[t][o]));
+        }
+      }
+      double precision = predictedTotal == 0 ? 0 : (double) tp / predictedTotal;
+      double recall = goldTotal == 0 ? 0 : (double) tp / goldTotal;
+      double f1 = precision + recall == 0 ? 0 : 2 * precision * recall / (precision + recall);
+      if (goldTotal > 0 || predictedTotal > 0) {
+        perTag.add(new TagScore(labels.get(t), precision, recall, f1, goldTotal));
+      }
+    }
+    confusions.sort(Comparator.comparingLong(Confusion::count).reversed()
+        .thenComparing(Confusion::gold).thenComparing(Confusion::predicted));
+    long[][] copy = new long[n][];
+    for (int i = 0; i < n; i++) {
+      copy[i] = m[i].clone();
+    }
+    long unknown = e.tokens() - e.knownTokens();
+    return new EvaluationReport(
+        e.accuracy(), e.knownAccuracy(), e.unknownAccuracy(), e.tokens(), e.knownTokens(), unknown,
+        e.sentences(), e.tokens() == 0 ? 0 : (double) unknown / e.tokens(), e.averageCandidates(),
+        e.tokensPerSecond(), e.model().order(), perTag,
+        List.copyOf(confusions.subList(0, Math.min(20, confusions.size()))),
+        new ConfusionMatrix(List.copyOf(labels), copy));
+  }
+
+  /** A plain-text summary for the terminal. */
+  public String toText() {
+    StringBuilder s = new StringBuilder();
+    s.append(String.format(Locale.ROOT, "tokens           %d in %d sentences%n", tokens, sentences));
+    s.append(String.format(Locale.ROOT, "accuracy         %.4f%n", accuracy));
+    s.append(String.format(Locale.ROOT, "known words      %.4f  (%d tokens)%n", knownAccuracy, knownTokens));
+    s.append(String.format(Locale.ROOT, "unknown words    %.4f  (%d tokens, %.1f%%)%n", unknownAccuracy, unknownTokens, 100 * unknownShare));
+    s.append(String.format(Locale.ROOT, "candidates/token %.2f%n", averageCandidatesPerToken));
+    s.append(String.format(Locale.ROOT, "%nper tag          precision  recall     F1   support%n"));
+    for (TagScore t : perTag) {
+      s.append(String.format(Locale.ROOT, "  %-14s %8.4f %8.4f %8.4f %8d%n", t.tag(), t.precision(), t.recall(), t.f1(), t.support()));
+    }
+    s.append(String.format(Locale.ROOT, "%nmost frequent confusions (gold -> tagged)%n"));
+    for (Confusion c : topConfusions.subList(0, Math.min(10, topConfusions.size()))) {
+      s.append(String.format(Locale.ROOT, "  %-8s -> %-8s %6d%n", c.gold(), c.predicted(), c.count()));
+    }
+    return s.toString();
+  }
+}

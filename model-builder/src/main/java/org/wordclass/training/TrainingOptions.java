@@ -1,0 +1,80 @@
+package org.wordclass.training;
+
+import java.util.LinkedHashMap;
+import java.util.Map;
+
+/**
+ * Everything that shapes a trained model besides its corpus. Every value is written into the
+ * model's provenance, so a model says how it was built.
+ *
+ * @param order 1 (bigram) or 2 (trigram) HMM; both tables are estimated, this is the default
+ *     decoding order
+ * @param maxSuffixLength longest word ending the unknown-word model counts
+ * @param rareWordMaxCount words seen at most this often feed the unknown-word model
+ * @param suffixWeight θ of successive abstraction; NaN means the standard deviation of the tag
+ *     probabilities, as Brants (2000) proposes
+ * @param openClassMinShare a tag is open (a candidate for unknown words) when at least this
+ *     share of the words seen once in training carry it
+ * @param shapeClasses keep separate ending counts for each {@link org.wordclass.model.WordShape};
+ *     when false, only capitalised and lower-case words are told apart, as in Brants (2000)
+ */
+public record TrainingOptions(
+    int order,
+    int maxSuffixLength,
+    int rareWordMaxCount,
+    double suffixWeight,
+    double openClassMinShare,
+    boolean shapeClasses) {
+
+  public static final TrainingOptions DEFAULTS = new TrainingOptions(2, 10, 10, Double.NaN, 0.002, true);
+
+  public TrainingOptions {
+    if (order != 1 && order != 2) {
+      throw new IllegalArgumentException("order must be 1 or 2, not " + order);
+    }
+    if (maxSuffixLength < 0) {
+      throw new IllegalArgumentException("maximum suffix length must not be negative: " + maxSuffixLength);
+    }
+    if (rareWordMaxCount < 1) {
+      throw new IllegalArgumentException("rare-word count must be at least 1: " + rareWordMaxCount);
+    }
+    if (!Double.isNaN(suffixWeight) && !(suffixWeight > 0)) {
+      throw new IllegalArgumentException("suffix weight must be positive: " + suffixWeight);
+    }
+    if (!(openClassMinShare >= 0 && openClassMinShare < 1)) {
+      throw new IllegalArgumentException("open-class share must be in [0, 1): " + openClassMinShare);
+    }
+  }
+
+  public TrainingOptions withOrder(int newOrder) {
+    return new TrainingOptions(newOrder, maxSuffixLength, rareWordMaxCount, suffixWeight, openClassMinShare, shapeClasses);
+  }
+
+  public TrainingOptions withSuffixWeight(double weight) {
+    return new TrainingOptions(order, maxSuffixLength, rareWordMaxCount, weight, openClassMinShare, shapeClasses);
+  }
+
+  public TrainingOptions withShapeClasses(boolean shapes) {
+    return new TrainingOptions(order, maxSuffixLength, rareWordMaxCount, suffixWeight, openClassMinShare, shapes);
+  }
+
+  public TrainingOptions withSuffix(int maxLength, int rareMaxCount) {
+    return new TrainingOptions(order, maxLength, rareMaxCount, suffixWeight, openClassMinShare, shapeClasses);
+  }
+
+  public TrainingOptions withOpenClassMinShare(double share) {
+    return new TrainingOptions(order, maxSuffixLength, rareWordMaxCount, suffixWeight, share, shapeClasses);
+  }
+
+  /** The options as provenance entries. */
+  public Map<String, String> describe() {
+    Map<String, String> m = new LinkedHashMap<>();
+    m.put("option.order", Integer.toString(order));
+    m.put("option.maxSuffixLength", Integer.toString(maxSuffixLength));
+    m.put("option.rareWordMaxCount", Integer.toString(rareWordMaxCount));
+    m.put("option.suffixWeight", Double.isNaN(suffixWeight) ? "auto" : Double.toString(suffixWeight));
+    m.put("option.openClassMinShare", Double.toString(openClassMinShare));
+    m.put("option.shapeClasses", Boolean.toString(shapeClasses));
+    return m;
+  }
+}
