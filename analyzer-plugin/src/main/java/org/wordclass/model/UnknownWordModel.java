@@ -1,5 +1,7 @@
 package org.wordclass.model;
 
+import java.util.Arrays;
+
 /**
  * Emission scores for words the lexicon does not hold, from their endings and spelling shape, in
  * the manner of Brants (2000), "TnT: a statistical part-of-speech tagger":
@@ -93,11 +95,26 @@ public final class UnknownWordModel {
    * @return length of the longest ending that was found in the counts
    */
   public int logEmissions(char[] buf, int off, int len, double[] scratch, double[] out) {
+    int depth = tagDistribution(buf, off, len, theta, null, scratch, out);
+    for (int i = 0; i < openTags.length; i++) {
+      out[i] = Math.log(out[i]) - logPrior[openTags[i]];
+    }
+    return depth;
+  }
+
+  /**
+   * Writes {@code P(openTag(k) | ending, shape)} into {@code out[k]}, by successive abstraction
+   * with weight {@code weight}. With {@code heldOut} (counts per open tag) those counts are taken
+   * out of every ending on the word's path first, which scores a training word as if it had
+   * not been seen: the leave-one-out estimate used to choose θ.
+   *
+   * @return length of the longest ending that was found in the counts
+   */
+  public int tagDistribution(char[] buf, int off, int len, double weight, long[] heldOut, double[] scratch, double[] out) {
     SuffixTrie trie = tries[trieOfShape[WordShape.classify(buf, off, len).ordinal()]];
-    int k = openTags.length;
     // the shape's own distribution, abstracted to the one over all rare words
-    System.arraycopy(baseDistribution, 0, out, 0, k);
-    abstractTo(trie, 0, out, scratch);
+    System.arraycopy(baseDistribution, 0, out, 0, openTags.length);
+    abstractTo(trie, 0, weight, heldOut, out, scratch);
     int node = 0;
     int depth = 0;
     while (depth < Math.min(len, maxSuffixLength)) {
@@ -107,32 +124,34 @@ public final class UnknownWordModel {
       }
       node = next;
       depth++;
-      abstractTo(trie, node, out, scratch);
-    }
-    for (int i = 0; i < k; i++) {
-      out[i] = Math.log(out[i]) - logPrior[openTags[i]];
+      abstractTo(trie, node, weight, heldOut, out, scratch);
     }
     return depth;
   }
 
   /** dist := (P^(t | node) + θ dist) / (1 + θ), over open tags. */
-  private void abstractTo(SuffixTrie trie, int node, double[] dist, double[] scratch) {
+  private void abstractTo(SuffixTrie trie, int node, double weight, long[] heldOut, double[] dist, double[] scratch) {
     int k = openTags.length;
-    java.util.Arrays.fill(scratch, 0, k, 0.0);
-    long counted = 0;
+    Arrays.fill(scratch, 0, k, 0.0);
     for (int i = trie.countStart[node], end = trie.countStart[node + 1]; i < end; i++) {
-      int open = java.util.Arrays.binarySearch(openTags, trie.countTag[i]);
+      int open = Arrays.binarySearch(openTags, trie.countTag[i]);
       if (open >= 0) {
         scratch[open] = trie.countValue[i];
-        counted += trie.countValue[i];
       }
+    }
+    double counted = 0;
+    for (int i = 0; i < k; i++) {
+      if (heldOut != null) {
+        scratch[i] = Math.max(0, scratch[i] - heldOut[i]);
+      }
+      counted += scratch[i];
     }
     if (counted == 0) {
       return;
     }
-    double norm = 1.0 / (1.0 + theta);
+    double norm = 1.0 / (1.0 + weight);
     for (int i = 0; i < k; i++) {
-      dist[i] = (scratch[i] / counted + theta * dist[i]) * norm;
+      dist[i] = (scratch[i] / counted + weight * dist[i]) * norm;
     }
   }
 
@@ -148,8 +167,18 @@ public final class UnknownWordModel {
     return openTags;
   }
 
+  /** Index of {@code tag} among the open tags, or a negative number if it is closed. */
+  public int openIndex(int tag) {
+    return Arrays.binarySearch(openTags, tag);
+  }
+
   double[] logPrior() {
     return logPrior;
+  }
+
+  /** {@code log P(tag)} over all training tokens. */
+  public double logPrior(int tag) {
+    return logPrior[tag];
   }
 
   double[] baseDistribution() {

@@ -137,11 +137,16 @@ public final class HmmEstimator {
     for (int k = 0; k < openTags.length; k++) {
       base[k] = (double) rareByTag[openTags[k]] / rareOpen;
     }
-    double theta = Double.isNaN(options.suffixWeight()) ? tagProbabilitySpread(tagTokens, total) : options.suffixWeight();
     SuffixTrie[] tries = new SuffixTrie[trieCount];
     for (int i = 0; i < trieCount; i++) {
       tries[i] = builders[i].build();
     }
+    UnknownWordModel model = new UnknownWordModel(1.0, options.maxSuffixLength(), openTags, logPrior, base, trieOfShape, tries);
+    double theta = switch (options.suffixWeightRule()) {
+      case HELD_OUT -> SuffixWeightSelection.choose(model, counts, finalId, options.rareWordMaxCount());
+      case TAG_SPREAD -> tagProbabilitySpread(tagTokens, total);
+      case FIXED -> options.suffixWeight();
+    };
     return new UnknownWordModel(theta, options.maxSuffixLength(), openTags, logPrior, base, trieOfShape, tries);
   }
 

@@ -11,8 +11,8 @@ import java.util.Map;
  *     decoding order
  * @param maxSuffixLength longest word ending the unknown-word model counts
  * @param rareWordMaxCount words seen at most this often feed the unknown-word model
- * @param suffixWeight θ of successive abstraction; NaN means the standard deviation of the tag
- *     probabilities, as Brants (2000) proposes
+ * @param suffixWeightRule how θ, the weight of shorter endings in successive abstraction, is set
+ * @param suffixWeight θ when the rule is {@link SuffixWeightRule#FIXED}; ignored otherwise
  * @param openClassMinShare a tag is open (a candidate for unknown words) when at least this
  *     share of the words seen once in training carry it
  * @param shapeClasses keep separate ending counts for each {@link org.wordclass.model.WordShape};
@@ -22,11 +22,22 @@ public record TrainingOptions(
     int order,
     int maxSuffixLength,
     int rareWordMaxCount,
+    SuffixWeightRule suffixWeightRule,
     double suffixWeight,
     double openClassMinShare,
     boolean shapeClasses) {
 
-  public static final TrainingOptions DEFAULTS = new TrainingOptions(2, 10, 10, Double.NaN, 0.002, true);
+  public static final TrainingOptions DEFAULTS = new TrainingOptions(2, 10, 10, SuffixWeightRule.HELD_OUT, Double.NaN, 0.002, false);
+
+  /** How θ of the suffix model is chosen. */
+  public enum SuffixWeightRule {
+    /** Leave-one-out over the rare training words (see {@code SuffixWeightSelection}). */
+    HELD_OUT,
+    /** The standard deviation of the unconditional tag probabilities, as Brants (2000) proposes. */
+    TAG_SPREAD,
+    /** A value given by the user. */
+    FIXED
+  }
 
   public TrainingOptions {
     if (order != 1 && order != 2) {
@@ -38,7 +49,7 @@ public record TrainingOptions(
     if (rareWordMaxCount < 1) {
       throw new IllegalArgumentException("rare-word count must be at least 1: " + rareWordMaxCount);
     }
-    if (!Double.isNaN(suffixWeight) && !(suffixWeight > 0)) {
+    if (suffixWeightRule == SuffixWeightRule.FIXED && !(suffixWeight > 0 && suffixWeight < Double.POSITIVE_INFINITY)) {
       throw new IllegalArgumentException("suffix weight must be positive: " + suffixWeight);
     }
     if (!(openClassMinShare >= 0 && openClassMinShare < 1)) {
@@ -47,23 +58,29 @@ public record TrainingOptions(
   }
 
   public TrainingOptions withOrder(int newOrder) {
-    return new TrainingOptions(newOrder, maxSuffixLength, rareWordMaxCount, suffixWeight, openClassMinShare, shapeClasses);
+    return new TrainingOptions(newOrder, maxSuffixLength, rareWordMaxCount, suffixWeightRule, suffixWeight, openClassMinShare, shapeClasses);
   }
 
+  /** A fixed θ. */
   public TrainingOptions withSuffixWeight(double weight) {
-    return new TrainingOptions(order, maxSuffixLength, rareWordMaxCount, weight, openClassMinShare, shapeClasses);
+    return new TrainingOptions(order, maxSuffixLength, rareWordMaxCount, SuffixWeightRule.FIXED, weight, openClassMinShare, shapeClasses);
+  }
+
+  /** θ chosen by a rule rather than given. */
+  public TrainingOptions withSuffixWeightRule(SuffixWeightRule rule) {
+    return new TrainingOptions(order, maxSuffixLength, rareWordMaxCount, rule, Double.NaN, openClassMinShare, shapeClasses);
   }
 
   public TrainingOptions withShapeClasses(boolean shapes) {
-    return new TrainingOptions(order, maxSuffixLength, rareWordMaxCount, suffixWeight, openClassMinShare, shapes);
+    return new TrainingOptions(order, maxSuffixLength, rareWordMaxCount, suffixWeightRule, suffixWeight, openClassMinShare, shapes);
   }
 
   public TrainingOptions withSuffix(int maxLength, int rareMaxCount) {
-    return new TrainingOptions(order, maxLength, rareMaxCount, suffixWeight, openClassMinShare, shapeClasses);
+    return new TrainingOptions(order, maxLength, rareMaxCount, suffixWeightRule, suffixWeight, openClassMinShare, shapeClasses);
   }
 
   public TrainingOptions withOpenClassMinShare(double share) {
-    return new TrainingOptions(order, maxSuffixLength, rareWordMaxCount, suffixWeight, share, shapeClasses);
+    return new TrainingOptions(order, maxSuffixLength, rareWordMaxCount, suffixWeightRule, suffixWeight, share, shapeClasses);
   }
 
   /** The options as provenance entries. */
@@ -72,7 +89,8 @@ public record TrainingOptions(
     m.put("option.order", Integer.toString(order));
     m.put("option.maxSuffixLength", Integer.toString(maxSuffixLength));
     m.put("option.rareWordMaxCount", Integer.toString(rareWordMaxCount));
-    m.put("option.suffixWeight", Double.isNaN(suffixWeight) ? "auto" : Double.toString(suffixWeight));
+    m.put("option.suffixWeight", suffixWeightRule == SuffixWeightRule.FIXED
+        ? Double.toString(suffixWeight) : suffixWeightRule.name().toLowerCase(java.util.Locale.ROOT).replace('_', '-'));
     m.put("option.openClassMinShare", Double.toString(openClassMinShare));
     m.put("option.shapeClasses", Boolean.toString(shapeClasses));
     return m;

@@ -1,0 +1,84 @@
+package org.wordclass.evaluation;
+
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.nio.file.Path;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+import org.junit.jupiter.api.Test;
+import org.wordclass.corpus.Corpus;
+import org.wordclass.corpus.TagColumn;
+import org.wordclass.model.HmmModel;
+import org.wordclass.testing.Corpora;
+import org.wordclass.training.HmmEstimator;
+import org.wordclass.training.TagCounts;
+import org.wordclass.training.TrainingOptions;
+
+/**
+ * Accuracy on the open Universal Dependencies treebanks in ../shared/corpora (source: UD
+ * English EWT v2.15, German GSD, Swedish Talbanken; see the README there), gold tokens, trained
+ * on one split and scored on another. The floors are what a faithful second-order HMM with a
+ * suffix model reaches on this web text; Brants (2000) reports 96.7% on newswire (Penn
+ * Treebank), which is easier. Every smoothing choice was made on EWT dev, never on test.
+ */
+class TreebankAccuracyTest {
+
+  private static HmmModel train(Path corpus, TagColumn column, TrainingOptions options) {
+    TagCounts counts = new TagCounts();
+    new Corpus(List.of(corpus), null, column).forEach(s -> counts.add(s.words(), s.tags()));
+    return new HmmEstimator(options).estimate(counts, Map.of());
+  }
+
+  private static EvaluationReport score(HmmModel model, Path corpus, TagColumn column) {
+    Evaluation evaluation = new Evaluation(model);
+    new Corpus(List.of(corpus), null, column).forEach(evaluation::add);
+    EvaluationReport report = evaluation.report();
+    System.out.printf(Locale.ROOT, "%s %s order %d: accuracy %.4f, known %.4f, unknown %.4f (%d tokens)%n",
+        corpus.getFileName(), column, model.order(), report.accuracy(), report.knownAccuracy(),
+        report.unknownAccuracy(), report.tokens());
+    return report;
+  }
+
+  @Test
+  void englishUposSecondOrderReachesFloorAndBeatsSimplerModels() {
+    Path train = Corpora.ewtTrain();
+    Path test = Corpora.ewtTest();
+    HmmModel model = train(train, TagColumn.UPOS, TrainingOptions.DEFAULTS);
+    EvaluationReport second = score(model, test, TagColumn.UPOS);
+    assertTrue(second.accuracy() >= 0.925, "EWT test UPOS accuracy " + second.accuracy());
+    assertTrue(second.knownAccuracy() > second.unknownAccuracy());
+
+    EvaluationReport first = score(train(train, TagColumn.UPOS, TrainingOptions.DEFAULTS.withOrder(1)), test, TagColumn.UPOS);
+    assertTrue(second.accuracy() > first.accuracy(), "second order should beat first order");
+
+    Evaluation baseline = new Evaluation(model);
+    MostFrequentTagBaseline mostFrequent = new MostFrequentTagBaseline(model);
+    new Corpus(List.of(test), null, TagColumn.UPOS).forEach(s -> mostFrequent.addTo(baseline, s));
+    System.out.printf(Locale.ROOT, "most-frequent-tag baseline: %.4f%n", baseline.accuracy());
+    assertTrue(first.accuracy() > baseline.accuracy() + 0.02, "an HMM should clearly beat the most-frequent-tag baseline");
+  }
+
+  @Test
+  void englishXposReachesFloor() {
+    HmmModel model = train(Corpora.ewtTrain(), TagColumn.XPOS, TrainingOptions.DEFAULTS);
+    EvaluationReport report = score(model, Corpora.ewtTest(), TagColumn.XPOS);
+    assertTrue(report.accuracy() >= 0.925, "EWT test XPOS (Penn Treebank tags) accuracy " + report.accuracy());
+  }
+
+  @Test
+  void germanSmallDataReachesFloor() {
+    Path dev = Corpora.require("ud-german-gsd/de_gsd-ud-dev.conllu");
+    Path test = Corpora.require("ud-german-gsd/de_gsd-ud-test.conllu");
+    EvaluationReport report = score(train(dev, TagColumn.UPOS, TrainingOptions.DEFAULTS), test, TagColumn.UPOS);
+    assertTrue(report.accuracy() >= 0.88, "German GSD test UPOS accuracy " + report.accuracy());
+  }
+
+  @Test
+  void swedishSmallDataReachesFloor() {
+    Path dev = Corpora.require("ud-swedish-talbanken/sv_talbanken-ud-dev.conllu");
+    Path test = Corpora.require("ud-swedish-talbanken/sv_talbanken-ud-test.conllu");
+    EvaluationReport report = score(train(dev, TagColumn.UPOS, TrainingOptions.DEFAULTS), test, TagColumn.UPOS);
+    assertTrue(report.accuracy() >= 0.88, "Swedish Talbanken test UPOS accuracy " + report.accuracy());
+  }
+}
