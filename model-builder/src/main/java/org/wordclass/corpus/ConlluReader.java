@@ -26,6 +26,7 @@ public final class ConlluReader extends SentenceReader {
     List<String> words = newList();
     List<String> tags = newList();
     List<Boolean> spaces = newList();
+    List<Sentence.MultiwordToken> multiwordTokens = newList();
     String text = null;
     long first = 0;
     int rangeEnd = -1;
@@ -61,8 +62,13 @@ public final class ConlluReader extends SentenceReader {
       }
       int dash = id.indexOf('-');
       if (dash >= 0) {
+        int rangeStart = parseId(id.substring(0, dash));
         rangeEnd = parseId(id.substring(dash + 1));
+        if (rangeStart != expectedId || rangeEnd < rangeStart) {
+          throw error("multiword token range " + id + " does not start at word " + expectedId);
+        }
         rangeSpaceAfter = !fields[9].contains("SpaceAfter=No");
+        multiwordTokens.add(new Sentence.MultiwordToken(rangeStart - 1, rangeEnd - 1, fields[1]));
         continue;
       }
       int wordId = parseId(id);
@@ -84,7 +90,7 @@ public final class ConlluReader extends SentenceReader {
         spaces.add(!fields[9].contains("SpaceAfter=No"));
       }
     }
-    return words.isEmpty() ? null : sentence(words, tags, text, spaces, first);
+    return words.isEmpty() ? null : sentence(words, tags, text, spaces, first, multiwordTokens);
   }
 
   private int parseId(String id) {

@@ -12,9 +12,25 @@ import java.util.List;
  *     clears it; for a multiword token it is read from the token's range line)
  * @param file name of the file the sentence came from
  * @param line line number of the sentence's first line in that file
+ * @param multiwordTokens surface tokens that stand for several words (CoNLL-U ranges such as
+ *     {@code 3-4 don't}), in order; empty when there are none or the format has none
  */
 public record Sentence(
-    List<String> words, List<String> tags, String text, boolean[] spaceAfter, String file, long line) {
+    List<String> words, List<String> tags, String text, boolean[] spaceAfter, String file, long line,
+    List<MultiwordToken> multiwordTokens) {
+
+  /** A surface token covering words {@code first..last} (0-based, inclusive). */
+  public record MultiwordToken(int first, int last, String form) {}
+
+  /** The words of {@code first..last} as one surface token, or null if they are not one. */
+  public MultiwordToken multiwordTokenStartingAt(int word) {
+    for (MultiwordToken token : multiwordTokens) {
+      if (token.first() == word) {
+        return token;
+      }
+    }
+    return null;
+  }
 
   public int size() {
     return words.size();

@@ -78,11 +78,16 @@ public abstract class SentenceReader implements Iterator<Sentence>, Closeable {
   }
 
   protected Sentence sentence(List<String> words, List<String> tags, String text, List<Boolean> spaceAfter, long firstLine) {
+    return sentence(words, tags, text, spaceAfter, firstLine, List.of());
+  }
+
+  protected Sentence sentence(List<String> words, List<String> tags, String text, List<Boolean> spaceAfter, long firstLine,
+      List<Sentence.MultiwordToken> multiwordTokens) {
     boolean[] spaces = new boolean[spaceAfter.size()];
     for (int i = 0; i < spaces.length; i++) {
       spaces[i] = spaceAfter.get(i);
     }
-    return new Sentence(List.copyOf(words), List.copyOf(tags), text, spaces, fileName, firstLine);
+    return new Sentence(List.copyOf(words), List.copyOf(tags), text, spaces, fileName, firstLine, List.copyOf(multiwordTokens));
   }
 
   protected static <T> List<T> newList() {
