@@ -48,7 +48,7 @@ public final class Decoder {
     this.model = model;
     this.order = order;
     this.lattice = new Lattice(model);
-    this.states = model.tags().size() + 1;
+    this.states = model.states().size() + 1;
     this.boundary = model.boundary();
     this.logBigram = model.logBigramTable();
     this.logTrigram = model.logTrigramTable();
@@ -74,12 +74,14 @@ public final class Decoder {
     return position < 0 ? 1 : lattice.candidateCount(position);
   }
 
+  /** The state of candidate {@code k}, or the boundary before the sequence. */
   private int tagAt(int position, int k) {
-    return position < 0 ? boundary : lattice.candidateTag(position, k);
+    return position < 0 ? boundary : lattice.candidateState(position, k);
   }
 
-  private double logEmission(int position, int k) {
-    return lattice.candidateLogEmission(position, k);
+  /** Emission of candidate k at {@code position} after candidate j of the position before. */
+  private double logEmission(int position, int j, int k) {
+    return lattice.logEmission(position, j, k);
   }
 
   /** Lays out one state per (previous candidate, candidate) pair (order 2) or per candidate (order 1). */
@@ -103,9 +105,11 @@ public final class Decoder {
     }
     int candidates = lattice.totalCandidates();
     if (posterior.length < candidates) {
-      int grown = Math.max(candidates, posterior.length * 2);
-      posterior = new double[grown];
-      scaledEmission = new double[grown];
+      posterior = new double[Math.max(candidates, posterior.length * 2)];
+    }
+    int pairs = lattice.totalPairs();
+    if (scaledEmission.length < pairs) {
+      scaledEmission = new double[Math.max(pairs, scaledEmission.length * 2)];
     }
     return total;
   }
@@ -146,13 +150,13 @@ public final class Decoder {
         double top = Double.NEGATIVE_INFINITY;
         int arg = 0;
         for (int j = 0; j < kp; j++) {
-          double s = (i == 0 ? 0 : score[prev + j]) + logBigram[tagAt(i - 1, j) * states + tk];
+          double s = (i == 0 ? 0 : score[prev + j]) + logBigram[tagAt(i - 1, j) * states + tk] + logEmission(i, j, k);
           if (s > top) {
             top = s;
             arg = j;
           }
         }
-        score[here + k] = top + logEmission(i, k);
+        score[here + k] = top;
         backPointer[here + k] = arg;
       }
     }
@@ -194,7 +198,7 @@ public final class Decoder {
               arg = h;
             }
           }
-          score[here + j * kc + k] = top + logEmission(i, k);
+          score[here + j * kc + k] = top + logEmission(i, j, k);
           backPointer[here + j * kc + k] = arg;
         }
       }
@@ -259,17 +263,34 @@ public final class Decoder {
     return posterior[lattice.candidateOffset(position) + k];
   }
 
+  /**
+   * Posterior probability that token {@code position} has the tag of its {@code k}-th
+   * candidate: the sum over all its candidate states of that tag.
+   */
+  public double tagPosterior(int position, int k) {
+    int tag = lattice.candidateTag(position, k);
+    double p = 0;
+    for (int c = 0; c < lattice.candidateCount(position); c++) {
+      if (lattice.candidateTag(position, c) == tag) {
+        p += posterior(position, c);
+      }
+    }
+    return p;
+  }
+
   /** Stores exp(emission - max emission of the token), and the sum of the maxima for the likelihood. */
   private void scaleEmissions(int n) {
     maxEmissionSum = 0;
+    double[] pairs = lattice.pairLogEmissions();
     for (int i = 0; i < n; i++) {
-      int base = lattice.candidateOffset(i);
+      int from = lattice.pairOffset(i);
+      int to = lattice.pairOffset(i + 1);
       double max = Double.NEGATIVE_INFINITY;
-      for (int k = 0; k < count(i); k++) {
-        max = Math.max(max, logEmission(i, k));
+      for (int p = from; p < to; p++) {
+        max = Math.max(max, pairs[p]);
       }
-      for (int k = 0; k < count(i); k++) {
-        scaledEmission[base + k] = Math.exp(logEmission(i, k) - max);
+      for (int p = from; p < to; p++) {
+        scaledEmission[p] = Math.exp(pairs[p] - max);
       }
       maxEmissionSum += max;
     }
@@ -281,15 +302,15 @@ public final class Decoder {
       int kp = count(i - 1);
       int here = stateStart[i];
       int prev = i == 0 ? 0 : stateStart[i - 1];
-      int emit = lattice.candidateOffset(i);
+      int emit = lattice.pairOffset(i);
+      int kc = count(i);
       double sum = 0;
-      for (int k = 0; k < count(i); k++) {
+      for (int k = 0; k < kc; k++) {
         int tk = tagAt(i, k);
         double a = 0;
         for (int j = 0; j < kp; j++) {
-          a += (i == 0 ? 1 : alpha[prev + j]) * bigram[tagAt(i - 1, j) * states + tk];
+          a += (i == 0 ? 1 : alpha[prev + j]) * bigram[tagAt(i - 1, j) * states + tk] * scaledEmission[emit + j * kc + k];
         }
-        a *= scaledEmission[emit + k];
         alpha[here + k] = a;
         sum += a;
       }
@@ -308,13 +329,14 @@ public final class Decoder {
     for (int i = n - 2; i >= 0; i--) {
       int here = stateStart[i];
       int next = stateStart[i + 1];
-      int emit = lattice.candidateOffset(i + 1);
+      int emit = lattice.pairOffset(i + 1);
+      int kn = count(i + 1);
       sum = 0;
       for (int j = 0; j < count(i); j++) {
         int tj = tagAt(i, j);
         double b = 0;
-        for (int k = 0; k < count(i + 1); k++) {
-          b += bigram[tj * states + tagAt(i + 1, k)] * scaledEmission[emit + k] * beta[next + k];
+        for (int k = 0; k < kn; k++) {
+          b += bigram[tj * states + tagAt(i + 1, k)] * scaledEmission[emit + j * kn + k] * beta[next + k];
         }
         beta[here + j] = b;
         sum += b;
@@ -339,7 +361,7 @@ public final class Decoder {
       int kc = count(i);
       int here = stateStart[i];
       int prev = i == 0 ? 0 : stateStart[i - 1];
-      int emit = lattice.candidateOffset(i);
+      int emit = lattice.pairOffset(i);
       double sum = 0;
       for (int j = 0; j < kp; j++) {
         int tj = tagAt(i - 1, j);
@@ -349,7 +371,7 @@ public final class Decoder {
           for (int h = 0; h < kpp; h++) {
             a += (i == 0 ? 1 : alpha[prev + h * kp + j]) * trigram[(tagAt(i - 2, h) * states + tj) * states + tk];
           }
-          a *= scaledEmission[emit + k];
+          a *= scaledEmission[emit + j * kc + k];
           alpha[here + j * kc + k] = a;
           sum += a;
         }
@@ -377,7 +399,7 @@ public final class Decoder {
       int kk = count(i + 1);
       int here = stateStart[i];
       int next = stateStart[i + 1];
-      int emit = lattice.candidateOffset(i + 1);
+      int emit = lattice.pairOffset(i + 1);
       sum = 0;
       for (int h = 0; h < kh; h++) {
         int th = tagAt(i - 1, h);
@@ -385,7 +407,7 @@ public final class Decoder {
           int base = (th * states + tagAt(i, j)) * states;
           double b = 0;
           for (int k = 0; k < kk; k++) {
-            b += trigram[base + tagAt(i + 1, k)] * scaledEmission[emit + k] * beta[next + j * kk + k];
+            b += trigram[base + tagAt(i + 1, k)] * scaledEmission[emit + j * kk + k] * beta[next + j * kk + k];
           }
           beta[here + h * kj + j] = b;
           sum += b;

@@ -3,28 +3,39 @@ package org.wordclass.decoding;
 import java.util.Arrays;
 import org.wordclass.model.HmmModel;
 import org.wordclass.model.Lexicon;
+import org.wordclass.model.StateSpace;
 import org.wordclass.model.UnknownWordModel;
 
 /**
- * The candidate tags of each token of a sequence with their emission log-probabilities: a known
- * word's own tags (the lexicon constraint), or the open-class tags scored by the unknown-word
- * model. Filled token by token from char buffers and reused across sequences, so steady-state
- * decoding allocates nothing.
+ * The candidate states of each token of a sequence with their emission log-probabilities: a
+ * known word's own states (the lexicon constraint), or the states of the open classes scored by
+ * the unknown-word model. Where the model splits classes by capitalisation, only the states that
+ * match how the token is written are candidates. Where a word's emission depends on the
+ * previous state, the lattice holds one emission per (previous candidate, candidate) pair.
  *
- * <p>Not thread-safe: one per decoding thread.
+ * <p>Filled token by token from char buffers and reused across sequences, so steady-state
+ * decoding allocates nothing. Not thread-safe: one per decoding thread.
  */
 public final class Lattice {
   private final HmmModel model;
+  private final StateSpace states;
+  private final boolean splitsByCapital;
   private final double[] unknownScratch;
   private final double[] unknownScores;
+  private char[] lowerCased = new char[32];
   private int size;
   private int[] candidateStart = new int[65];
-  private int[] candidateTag = new int[256];
+  private int[] candidateState = new int[256];
   private double[] candidateLogEmission = new double[256];
+  private int[] candidateEntry = new int[256];
   private int[] wordId = new int[64];
+  private int[] pairStart = new int[65];
+  private double[] pairLogEmission = new double[1024];
 
   public Lattice(HmmModel model) {
     this.model = model;
+    this.states = model.states();
+    this.splitsByCapital = states.uses(StateSpace.CAPITALISED);
     int open = model.unknownWords().openTagCount();
     this.unknownScratch = new double[open];
     this.unknownScores = new double[open];
@@ -47,30 +58,14 @@ public final class Lattice {
   /** Appends the token {@code buf[off..off+len)}. */
   public void add(char[] buf, int off, int len) {
     ensureTokenCapacity(size + 1);
-    Lexicon lexicon = model.lexicon();
-    int word = lexicon.lookup(buf, off, len);
+    int flags = splitsByCapital && size > 0 && startsWithCapital(buf, off, len) ? StateSpace.CAPITALISED : 0;
+    int word = lookup(buf, off, len);
     wordId[size] = word;
     int start = candidateStart[size];
-    if (word >= 0) {
-      int n = lexicon.tagCount(word);
-      ensureCandidateCapacity(start + n);
-      for (int k = 0; k < n; k++) {
-        candidateTag[start + k] = lexicon.tag(word, k);
-        candidateLogEmission[start + k] = lexicon.logEmission(word, k);
-      }
-      candidateStart[size + 1] = start + n;
-    } else {
-      UnknownWordModel unknown = model.unknownWords();
-      int n = unknown.openTagCount();
-      ensureCandidateCapacity(start + n);
-      unknown.logEmissions(buf, off, len, unknownScratch, unknownScores);
-      for (int k = 0; k < n; k++) {
-        candidateTag[start + k] = unknown.openTag(k);
-        candidateLogEmission[start + k] = unknownScores[k];
-      }
-      candidateStart[size + 1] = start + n;
-    }
+    int end = word >= 0 ? addKnown(word, flags, start) : addUnknown(buf, off, len, flags, start);
+    candidateStart[size + 1] = end;
     size++;
+    fillPairEmissions(size - 1);
   }
 
   /** Appends a token given as a String. */
@@ -78,19 +73,122 @@ public final class Lattice {
     add(token.toCharArray(), 0, token.length());
   }
 
-  /** Number of candidate tags of token {@code position}. */
+  private static boolean startsWithCapital(char[] buf, int off, int len) {
+    return len > 0 && (Character.isUpperCase(buf[off]) || Character.isTitleCase(buf[off]));
+  }
+
+  /** The word's id; a capitalised first word missing from the lexicon is looked up in lower case. */
+  private int lookup(char[] buf, int off, int len) {
+    Lexicon lexicon = model.lexicon();
+    int word = lexicon.lookup(buf, off, len);
+    if (word < 0 && size == 0 && model.cues().lowercaseFirstWord() && startsWithCapital(buf, off, len)) {
+      if (lowerCased.length < len) {
+        lowerCased = new char[Math.max(len, 2 * lowerCased.length)];
+      }
+      for (int i = 0; i < len; i++) {
+        lowerCased[i] = Character.toLowerCase(buf[off + i]);
+      }
+      word = lexicon.lookup(lowerCased, 0, len);
+    }
+    return word;
+  }
+
+  private int addKnown(int word, int flags, int start) {
+    Lexicon lexicon = model.lexicon();
+    int n = lexicon.tagCount(word);
+    ensureCandidateCapacity(start + n);
+    int end = start;
+    for (int pass = 0; pass < 2 && end == start; pass++) {
+      // first pass: states that match how the token is written; if none do, all of them
+      for (int k = 0; k < n; k++) {
+        int state = lexicon.tag(word, k);
+        if (pass == 1 || !splitsByCapital || states.flags(state) == flags) {
+          candidateState[end] = state;
+          candidateLogEmission[end] = lexicon.logEmission(word, k);
+          candidateEntry[end] = k;
+          end++;
+        }
+      }
+    }
+    return end;
+  }
+
+  private int addUnknown(char[] buf, int off, int len, int flags, int start) {
+    UnknownWordModel unknown = model.unknownWords();
+    unknown.logEmissions(buf, off, len, unknownScratch, unknownScores);
+    int end = start;
+    for (int pass = 0; pass < 2 && end == start; pass++) {
+      for (int k = 0; k < unknown.openTagCount(); k++) {
+        for (int state : states.statesOf(unknown.openTag(k))) {
+          if (pass == 1 || !splitsByCapital || states.flags(state) == flags) {
+            ensureCandidateCapacity(end + 1);
+            candidateState[end] = state;
+            candidateLogEmission[end] = unknownScores[k];
+            candidateEntry[end] = -1;
+            end++;
+          }
+        }
+      }
+    }
+    return end;
+  }
+
+  /** Emissions of {@code position} for every candidate of the position before it. */
+  private void fillPairEmissions(int position) {
+    int previous = position == 0 ? 1 : candidateCount(position - 1);
+    int here = candidateCount(position);
+    int start = pairStart[position];
+    int end = start + previous * here;
+    if (end > pairLogEmission.length) {
+      pairLogEmission = Arrays.copyOf(pairLogEmission, Math.max(end, 2 * pairLogEmission.length));
+    }
+    pairStart[position + 1] = end;
+    int word = wordId[position];
+    boolean contexts = word >= 0 && model.lexicon().hasContexts(word);
+    double unseen = model.cues().unseenContextLogWeight();
+    int first = candidateStart[position];
+    for (int j = 0; j < previous; j++) {
+      int previousState = position == 0 ? model.boundary() : candidateState(position - 1, j);
+      for (int k = 0; k < here; k++) {
+        double e = candidateLogEmission[first + k];
+        if (contexts) {
+          float c = model.lexicon().contextLogEmission(word, candidateEntry[first + k], previousState);
+          e = Float.isNaN(c) ? e + unseen : c;
+        }
+        pairLogEmission[start + j * here + k] = e;
+      }
+    }
+  }
+
+  /** Number of candidate states of token {@code position}. */
   public int candidateCount(int position) {
     return candidateStart[position + 1] - candidateStart[position];
   }
 
-  /** The {@code k}-th candidate tag of token {@code position}. */
-  public int candidateTag(int position, int k) {
-    return candidateTag[candidateStart[position] + k];
+  /** The {@code k}-th candidate state of token {@code position}. */
+  public int candidateState(int position, int k) {
+    return candidateState[candidateStart[position] + k];
   }
 
-  /** Emission log-probability of the {@code k}-th candidate of token {@code position}. */
+  /** The tag of the {@code k}-th candidate of token {@code position}. */
+  public int candidateTag(int position, int k) {
+    return states.tagOf(candidateState(position, k));
+  }
+
+  /**
+   * Emission log-probability of the {@code k}-th candidate of token {@code position}, regardless
+   * of context.
+   */
   public double candidateLogEmission(int position, int k) {
     return candidateLogEmission[candidateStart[position] + k];
+  }
+
+  /**
+   * Emission log-probability of the {@code k}-th candidate of {@code position} after the {@code
+   * j}-th candidate of the position before (j = 0 for the first token, after the boundary).
+   */
+  public double logEmission(int position, int j, int k) {
+    return pairLogEmission[pairStart[position] + j * candidateCount(position) + k];
   }
 
   /** Whether the token at {@code position} is in the model's lexicon. */
@@ -103,12 +201,13 @@ public final class Lattice {
     return candidateStart[position];
   }
 
-  int[] candidateTags() {
-    return candidateTag;
+  /** First index of the emissions of {@code position} in the flat pair array. */
+  int pairOffset(int position) {
+    return pairStart[position];
   }
 
-  double[] candidateLogEmissions() {
-    return candidateLogEmission;
+  double[] pairLogEmissions() {
+    return pairLogEmission;
   }
 
   /** Total number of candidates over all tokens. */
@@ -116,19 +215,26 @@ public final class Lattice {
     return candidateStart[size];
   }
 
+  /** Total number of (previous candidate, candidate) pairs over all tokens. */
+  int totalPairs() {
+    return pairStart[size];
+  }
+
   private void ensureTokenCapacity(int tokens) {
     if (tokens + 1 > candidateStart.length) {
       int grown = Math.max(tokens + 1, candidateStart.length * 2);
       candidateStart = Arrays.copyOf(candidateStart, grown);
+      pairStart = Arrays.copyOf(pairStart, grown);
       wordId = Arrays.copyOf(wordId, grown);
     }
   }
 
   private void ensureCandidateCapacity(int candidates) {
-    if (candidates > candidateTag.length) {
-      int grown = Math.max(candidates, candidateTag.length * 2);
-      candidateTag = Arrays.copyOf(candidateTag, grown);
+    if (candidates > candidateState.length) {
+      int grown = Math.max(candidates, candidateState.length * 2);
+      candidateState = Arrays.copyOf(candidateState, grown);
       candidateLogEmission = Arrays.copyOf(candidateLogEmission, grown);
+      candidateEntry = Arrays.copyOf(candidateEntry, grown);
     }
   }
 }

@@ -44,7 +44,7 @@ public final class Tagger {
       decoder.forwardBackward();
     }
     for (int i = 0; i < n; i++) {
-      confidences[i] = withConfidence ? decoder.posterior(i, best[i]) : Double.NaN;
+      confidences[i] = withConfidence ? decoder.tagPosterior(i, best[i]) : Double.NaN;
       known[i] = lattice.isKnown(i);
     }
     return new Tagging(decoder.tagsOf(best), confidences, known);

@@ -11,9 +11,11 @@ import java.util.TreeMap;
  * first-order (bigram) and a second-order (trigram) chain. {@link #order()} is the order the
  * model was trained to be decoded with; both tables are always present, so a decoder may choose.
  *
- * <p>The sentence boundary is the extra state {@link #boundary()} ({@code = tags().size()}): it
- * stands for "before the sentence" in a context and for "end of sentence" as the next state.
- * Tables are flat arrays indexed by {@link #bigramIndex} and {@link #trigramIndex}.
+ * <p>Transitions and emissions are over hidden states ({@link #states()}); each state stands for
+ * one tag, and a plain model has one state per tag. The sentence boundary is the extra state
+ * {@link #boundary()} ({@code = states().size()}): it stands for "before the sentence" in a
+ * context and for "end of sentence" as the next state. Tables are flat arrays indexed by
+ * {@link #bigramIndex} and {@link #trigramIndex}.
  *
  * <p>Immutable and safe to share between threads; one loaded copy serves every analyzer.
  * Memory: {@code 16 (T+1)^3} bytes for the trigram tables plus the lexicon and the suffix tries.
@@ -21,6 +23,8 @@ import java.util.TreeMap;
 public final class HmmModel {
   private final int order;
   private final TagSet tags;
+  private final StateSpace states;
+  private final DecodingCues cues;
   private final double[] logBigram;
   private final double[] logTrigram;
   private final double[] bigram;
@@ -29,6 +33,19 @@ public final class HmmModel {
   private final UnknownWordModel unknownWords;
   private final SortedMap<String, String> provenance;
 
+  /**
+   * Cues a decoder applies beyond the tables.
+   *
+   * @param lowercaseFirstWord look an unknown capitalised first word of a sentence up in lower
+   *     case ("Bake" as "bake"), since capitals there say nothing about the class
+   * @param unseenContextLogWeight for words with context-dependent emissions: log of the weight
+   *     of the plain emission when the previous state was never seen before the word
+   */
+  public record DecodingCues(boolean lowercaseFirstWord, double unseenContextLogWeight) {
+    public static final DecodingCues NONE = new DecodingCues(false, 0);
+  }
+
+  /** A model with one state per tag and no extra cues. */
   public HmmModel(
       int order,
       TagSet tags,
@@ -37,22 +54,54 @@ public final class HmmModel {
       Lexicon lexicon,
       UnknownWordModel unknownWords,
       Map<String, String> provenance) {
+    this(order, tags, StateSpace.oneStatePerTag(tags.size()), DecodingCues.NONE, logBigram, logTrigram, lexicon,
+        unknownWords, provenance);
+  }
+
+  /**
+   * A model over {@code states}; the transition tables are indexed by state, with the boundary
+   * state {@code states.size()}, and the lexicon lists states.
+   */
+  public HmmModel(
+      int order,
+      TagSet tags,
+      StateSpace states,
+      DecodingCues cues,
+      double[] logBigram,
+      double[] logTrigram,
+      Lexicon lexicon,
+      UnknownWordModel unknownWords,
+      Map<String, String> provenance) {
     if (order != 1 && order != 2) {
       throw new IllegalArgumentException("order must be 1 or 2, not " + order);
     }
-    int states = tags.size() + 1;
-    if (logBigram.length != states * states || logTrigram.length != states * states * states) {
-      throw new IllegalArgumentException("transition tables do not match a tag set of " + tags.size());
+    if (states.tagCount() != tags.size()) {
+      throw new IllegalArgumentException("state space is for " + states.tagCount() + " tags, not " + tags.size());
+    }
+    int n = states.size() + 1;
+    if (logBigram.length != (long) n * n || logTrigram.length != (long) n * n * n) {
+      throw new IllegalArgumentException("transition tables do not match " + states.size() + " states");
     }
     this.order = order;
     this.tags = tags;
-    this.logBigram = logBigram.clone();
-    this.logTrigram = logTrigram.clone();
+    this.states = states;
+    this.cues = cues;
+    this.logBigram = toFloatPrecision(logBigram);
+    this.logTrigram = toFloatPrecision(logTrigram);
     this.bigram = exp(logBigram);
     this.trigram = exp(logTrigram);
     this.lexicon = lexicon;
     this.unknownWords = unknownWords;
     this.provenance = Collections.unmodifiableSortedMap(new TreeMap<>(provenance));
+  }
+
+  /** Tables are stored as floats; rounding here makes a trained model equal its loaded copy. */
+  private static double[] toFloatPrecision(double[] values) {
+    double[] out = new double[values.length];
+    for (int i = 0; i < values.length; i++) {
+      out[i] = (float) values[i];
+    }
+    return out;
   }
 
   private static double[] exp(double[] logs) {
@@ -71,18 +120,27 @@ public final class HmmModel {
     return tags;
   }
 
+  /** The hidden states and the tag of each. */
+  public StateSpace states() {
+    return states;
+  }
+
+  public DecodingCues cues() {
+    return cues;
+  }
+
   /** The boundary state: before the first and after the last word of a sentence. */
   public int boundary() {
-    return tags.size();
+    return states.size();
   }
 
   public int bigramIndex(int previous, int next) {
-    return previous * (tags.size() + 1) + next;
+    return previous * (states.size() + 1) + next;
   }
 
   public int trigramIndex(int first, int previous, int next) {
-    int states = tags.size() + 1;
-    return (first * states + previous) * states + next;
+    int n = states.size() + 1;
+    return (first * n + previous) * n + next;
   }
 
   /** {@code log P(next | previous)}. */
@@ -130,7 +188,7 @@ public final class HmmModel {
 
   /** Approximate heap size in bytes of the loaded model. */
   public long ramBytesUsed() {
-    return 16L * (logBigram.length + logTrigram.length)
+    return 16L * (logBigram.length + logTrigram.length) + 5L * states.size()
         + lexicon.ramBytesUsed()
         + unknownWords.ramBytesUsed();
   }

@@ -15,12 +15,32 @@ import java.util.List;
  * pair. Immutable and safe to share between threads.
  */
 public final class Lexicon {
-  /** One word with its tags, sorted by tag index. */
-  public record Entry(String word, int[] tags, float[] logEmissions) {
+  /**
+   * One word with its states (tags, in a model with one state per tag), sorted ascending, and
+   * for each state optionally its emission log-probabilities after particular previous states
+   * ({@code contextStates[k]} ascending, {@code contextLogEmissions[k]} beside them).
+   */
+  public record Entry(String word, int[] tags, float[] logEmissions, int[][] contextStates, float[][] contextLogEmissions) {
+    private static final int[][] NO_STATES = new int[0][];
+    private static final float[][] NO_EMISSIONS = new float[0][];
+
     public Entry {
       if (tags.length == 0 || tags.length != logEmissions.length) {
         throw new IllegalArgumentException("word '" + word + "' needs one or more tags with one emission each");
       }
+      if (contextStates.length != contextLogEmissions.length || (contextStates.length != 0 && contextStates.length != tags.length)) {
+        throw new IllegalArgumentException("word '" + word + "' has context emissions for some of its states only");
+      }
+    }
+
+    /** An entry without context-dependent emissions. */
+    public Entry(String word, int[] tags, float[] logEmissions) {
+      this(word, tags, logEmissions, NO_STATES, NO_EMISSIONS);
+    }
+
+    /** Whether the entry has context-dependent emissions. */
+    public boolean hasContexts() {
+      return contextStates.length > 0;
     }
   }
 
@@ -30,6 +50,11 @@ public final class Lexicon {
   private final int[] tagStart;
   private final short[] tagIds;
   private final float[] logEmissions;
+  /** Per word/state pair {@code p}: its contexts are {@code contextStart[p] .. contextStart[p+1]}. */
+  private final int[] contextStart;
+  private final short[] contextState;
+  private final float[] contextLogEmission;
+  private final boolean[] hasContexts;
 
   /** Builds a lexicon; entries must have distinct words. */
   public Lexicon(List<Entry> entries) {
@@ -38,10 +63,18 @@ public final class Lexicon {
     tagStart = new int[words + 1];
     int totalChars = 0;
     int totalTags = 0;
+    int totalContexts = 0;
     for (Entry e : entries) {
       totalChars += e.word().length();
       totalTags += e.tags().length;
+      for (int[] c : e.contextStates()) {
+        totalContexts += c.length;
+      }
     }
+    contextStart = new int[totalTags + 1];
+    contextState = new short[totalContexts];
+    contextLogEmission = new float[totalContexts];
+    hasContexts = new boolean[words];
     chars = new char[totalChars];
     tagIds = new short[totalTags];
     logEmissions = new float[totalTags];
@@ -49,21 +82,32 @@ public final class Lexicon {
     Arrays.fill(slots, -1);
     int c = 0;
     int t = 0;
+    int x = 0;
     for (int w = 0; w < words; w++) {
       Entry e = entries.get(w);
       wordStart[w] = c;
       e.word().getChars(0, e.word().length(), chars, c);
       c += e.word().length();
       tagStart[w] = t;
+      hasContexts[w] = e.hasContexts();
       for (int k = 0; k < e.tags().length; k++) {
         tagIds[t] = (short) e.tags()[k];
         logEmissions[t] = e.logEmissions()[k];
+        contextStart[t] = x;
+        if (e.hasContexts()) {
+          for (int j = 0; j < e.contextStates()[k].length; j++) {
+            contextState[x] = (short) e.contextStates()[k][j];
+            contextLogEmission[x] = e.contextLogEmissions()[k][j];
+            x++;
+          }
+        }
         t++;
       }
       wordStart[w + 1] = c;
       tagStart[w + 1] = t;
       insert(w);
     }
+    contextStart[t] = x;
   }
 
   private static int tableSize(int words) {
@@ -152,6 +196,38 @@ public final class Lexicon {
     return logEmissions[tagStart[word] + k];
   }
 
+  /** Whether the word's emissions depend on the previous state. */
+  public boolean hasContexts(int word) {
+    return hasContexts[word];
+  }
+
+  /**
+   * Emission log-probability of the word under its {@code k}-th state right after state {@code
+   * previous}, or NaN if that context was not seen with the word.
+   */
+  public float contextLogEmission(int word, int k, int previous) {
+    int pair = tagStart[word] + k;
+    int from = contextStart[pair];
+    int to = contextStart[pair + 1];
+    while (from < to) {
+      int mid = (from + to) >>> 1;
+      int s = contextState[mid];
+      if (s < previous) {
+        from = mid + 1;
+      } else if (s > previous) {
+        to = mid;
+      } else {
+        return contextLogEmission[mid];
+      }
+    }
+    return Float.NaN;
+  }
+
+  /** Total number of word/context/state triples with their own emission. */
+  public int contextCount() {
+    return contextState.length;
+  }
+
   /** Total number of word/tag pairs. */
   public int pairCount() {
     return tagIds.length;
@@ -164,17 +240,34 @@ public final class Lexicon {
       int n = tagCount(w);
       int[] tags = new int[n];
       float[] emissions = new float[n];
+      int[][] contexts = new int[hasContexts[w] ? n : 0][];
+      float[][] contextEmissions = new float[hasContexts[w] ? n : 0][];
       for (int k = 0; k < n; k++) {
         tags[k] = tag(w, k);
         emissions[k] = logEmission(w, k);
+        if (hasContexts[w]) {
+          int pair = tagStart[w] + k;
+          int from = contextStart[pair];
+          int to = contextStart[pair + 1];
+          contexts[k] = new int[to - from];
+          contextEmissions[k] = Arrays.copyOfRange(contextLogEmission, from, to);
+          for (int j = from; j < to; j++) {
+            contexts[k][j - from] = contextState[j];
+          }
+        }
       }
-      out.add(new Entry(word(w), tags, emissions));
+      out.add(new Entry(word(w), tags, emissions, contexts, contextEmissions));
     }
     return out;
   }
 
   /** Approximate heap size in bytes. */
   public long ramBytesUsed() {
-    return 2L * chars.length + 4L * (wordStart.length + slots.length + tagStart.length) + 6L * tagIds.length;
+    return 2L * chars.length + 4L * (wordStart.length + slots.length + tagStart.length) + 10L * tagIds.length
+        + 6L * contextState.length + words();
+  }
+
+  private int words() {
+    return hasContexts.length;
   }
 }

@@ -81,8 +81,16 @@ public final class ModelFile {
     for (String name : tags.names()) {
       out.writeString(name);
     }
-    writeDoubles(out, model.logBigramTable());
-    writeDoubles(out, model.logTrigramTable());
+    StateSpace states = model.states();
+    out.writeVInt(states.size());
+    for (int s = 0; s < states.size(); s++) {
+      out.writeVInt(states.tagOf(s));
+      out.writeByte((byte) states.flags(s));
+    }
+    out.writeByte((byte) (model.cues().lowercaseFirstWord() ? 1 : 0));
+    out.writeLong(Double.doubleToLongBits(model.cues().unseenContextLogWeight()));
+    writeFloats(out, model.logBigramTable());
+    writeFloats(out, model.logTrigramTable());
     writeLexicon(out, model.lexicon());
     writeUnknownWords(out, model.unknownWords(), tags.size());
     CodecUtil.writeFooter(out);
@@ -102,14 +110,29 @@ public final class ModelFile {
     }
   }
 
+  /** Tables are kept in memory at float precision (see HmmModel), so floats lose nothing. */
+  private static void writeFloats(DataOutput out, double[] values) throws IOException {
+    for (double v : values) {
+      out.writeInt(Float.floatToIntBits((float) v));
+    }
+  }
+
   private static void writeLexicon(DataOutput out, Lexicon lexicon) throws IOException {
     out.writeVInt(lexicon.size());
-    for (int w = 0; w < lexicon.size(); w++) {
-      out.writeString(lexicon.word(w));
-      out.writeVInt(lexicon.tagCount(w));
-      for (int k = 0; k < lexicon.tagCount(w); k++) {
-        out.writeVInt(lexicon.tag(w, k));
-        out.writeInt(Float.floatToIntBits(lexicon.logEmission(w, k)));
+    for (Lexicon.Entry e : lexicon.entries()) {
+      out.writeString(e.word());
+      out.writeVInt(e.tags().length);
+      out.writeByte((byte) (e.hasContexts() ? 1 : 0));
+      for (int k = 0; k < e.tags().length; k++) {
+        out.writeVInt(e.tags()[k]);
+        out.writeInt(Float.floatToIntBits(e.logEmissions()[k]));
+        if (e.hasContexts()) {
+          out.writeVInt(e.contextStates()[k].length);
+          for (int j = 0; j < e.contextStates()[k].length; j++) {
+            out.writeVInt(e.contextStates()[k][j]);
+            out.writeInt(Float.floatToIntBits(e.contextLogEmissions()[k][j]));
+          }
+        }
       }
     }
   }
@@ -223,12 +246,14 @@ public final class ModelFile {
       names.add(in.readString());
     }
     TagSet tags = new TagSet(names);
-    int states = tagCount + 1;
-    double[] logBigram = readDoubles(in, limits.count((long) states * states, 8, "bigram entries"));
-    double[] logTrigram = readDoubles(in, limits.count((long) states * states * states, 8, "trigram entries"));
-    Lexicon lexicon = readLexicon(in, limits, tagCount);
+    StateSpace states = readStates(in, limits, tagCount);
+    HmmModel.DecodingCues cues = new HmmModel.DecodingCues(in.readByte() != 0, Double.longBitsToDouble(in.readLong()));
+    long n = states.size() + 1;
+    double[] logBigram = readFloats(in, limits.count(n * n, 4, "bigram entries"));
+    double[] logTrigram = readFloats(in, limits.count(n * n * n, 4, "trigram entries"));
+    Lexicon lexicon = readLexicon(in, limits, states.size());
     UnknownWordModel unknown = readUnknownWords(in, limits, tagCount);
-    return new HmmModel(order, tags, logBigram, logTrigram, lexicon, unknown, provenance);
+    return new HmmModel(order, tags, states, cues, logBigram, logTrigram, lexicon, unknown, provenance);
   }
 
   /** Checks declared sizes against the bytes left in the file before anything is allocated. */
@@ -252,6 +277,25 @@ public final class ModelFile {
     return map;
   }
 
+  private static StateSpace readStates(DataInput in, Limits limits, int tagCount) throws IOException {
+    int count = limits.count(in.readVInt(), 2, "states");
+    int[] tagOfState = new int[count];
+    byte[] flags = new byte[count];
+    for (int s = 0; s < count; s++) {
+      tagOfState[s] = tagIndex(in.readVInt(), tagCount);
+      flags[s] = in.readByte();
+    }
+    return new StateSpace(tagCount, tagOfState, flags);
+  }
+
+  private static double[] readFloats(DataInput in, int count) throws IOException {
+    double[] values = new double[count];
+    for (int i = 0; i < count; i++) {
+      values[i] = Float.intBitsToFloat(in.readInt());
+    }
+    return values;
+  }
+
   private static double[] readDoubles(DataInput in, int count) throws IOException {
     double[] values = new double[count];
     for (int i = 0; i < count; i++) {
@@ -267,19 +311,31 @@ public final class ModelFile {
     return tag;
   }
 
-  private static Lexicon readLexicon(DataInput in, Limits limits, int tagCount) throws IOException {
-    int words = limits.count(in.readVInt(), 3, "lexicon words");
+  private static Lexicon readLexicon(DataInput in, Limits limits, int stateCount) throws IOException {
+    int words = limits.count(in.readVInt(), 4, "lexicon words");
     List<Lexicon.Entry> entries = new ArrayList<>(words);
     for (int w = 0; w < words; w++) {
       String word = in.readString();
-      int n = limits.count(in.readVInt(), 5, "tags of a word");
-      int[] wordTags = new int[n];
+      int n = limits.count(in.readVInt(), 5, "states of a word");
+      boolean contexts = in.readByte() != 0;
+      int[] wordStates = new int[n];
       float[] emissions = new float[n];
+      int[][] contextStates = new int[contexts ? n : 0][];
+      float[][] contextEmissions = new float[contexts ? n : 0][];
       for (int k = 0; k < n; k++) {
-        wordTags[k] = tagIndex(in.readVInt(), tagCount);
+        wordStates[k] = tagIndex(in.readVInt(), stateCount);
         emissions[k] = Float.intBitsToFloat(in.readInt());
+        if (contexts) {
+          int m = limits.count(in.readVInt(), 5, "contexts of a word");
+          contextStates[k] = new int[m];
+          contextEmissions[k] = new float[m];
+          for (int j = 0; j < m; j++) {
+            contextStates[k][j] = tagIndex(in.readVInt(), stateCount + 1);
+            contextEmissions[k][j] = Float.intBitsToFloat(in.readInt());
+          }
+        }
       }
-      entries.add(new Lexicon.Entry(word, wordTags, emissions));
+      entries.add(new Lexicon.Entry(word, wordStates, emissions, contextStates, contextEmissions));
     }
     return new Lexicon(entries);
   }
