@@ -6,6 +6,8 @@ import java.nio.file.AtomicMoveNotSupportedException;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.nio.file.StandardCopyOption;
+import java.nio.file.attribute.PosixFileAttributeView;
+import java.nio.file.attribute.PosixFilePermissions;
 
 /**
  * Writes report files through a temporary file in the same folder that is moved into place, so a
@@ -27,6 +29,7 @@ final class AtomicOutput {
       try (OutputStream out = Files.newOutputStream(tmp)) {
         content.writeTo(out);
       }
+      makeReadable(tmp);
       try {
         Files.move(tmp, target, StandardCopyOption.REPLACE_EXISTING, StandardCopyOption.ATOMIC_MOVE);
       } catch (AtomicMoveNotSupportedException e) {
@@ -34,6 +37,16 @@ final class AtomicOutput {
       }
     } finally {
       Files.deleteIfExists(tmp);
+    }
+  }
+
+  /**
+   * Temporary files are created readable by their owner only; a report or model is meant to be
+   * shared, so it gets the usual rw-r--r-- where the file system has POSIX permissions.
+   */
+  static void makeReadable(Path file) throws IOException {
+    if (Files.getFileAttributeView(file, PosixFileAttributeView.class) != null) {
+      Files.setPosixFilePermissions(file, PosixFilePermissions.fromString("rw-r--r--"));
     }
   }
 }

@@ -1,5 +1,6 @@
 package org.wordclass.cli;
 
+import java.io.IOException;
 import java.nio.file.Path;
 import org.wordclass.corpus.Corpus;
 import org.wordclass.corpus.TagColumn;
@@ -46,7 +47,7 @@ final class EvaluateCommand extends BaseCommand {
     return OK;
   }
 
-  private void writeFiles(EvaluationReport report, String title) throws java.io.IOException {
+  private void writeFiles(EvaluationReport report, String title) throws IOException {
     if (json != null) {
       Json.write(json, report);
     }

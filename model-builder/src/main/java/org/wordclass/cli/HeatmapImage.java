@@ -19,6 +19,11 @@ import javax.imageio.ImageIO;
  * place is drawn smaller rather than moving the grid.
  */
 final class HeatmapImage {
+  static {
+    // before any AWT class is touched: no display is needed or wanted
+    System.setProperty("java.awt.headless", "true");
+  }
+
   static final int CELL = 46;
   static final int PADDING = 16;
   static final int TITLE_HEIGHT = 34;
@@ -50,7 +55,6 @@ final class HeatmapImage {
   }
 
   static BufferedImage draw(ConfusionHeatmap map, String title) {
-    System.setProperty("java.awt.headless", "true");
     int n = map.size();
     BufferedImage image = new BufferedImage(width(n), height(n), BufferedImage.TYPE_INT_RGB);
     Graphics2D g = image.createGraphics();
@@ -74,12 +78,17 @@ final class HeatmapImage {
     g.setColor(Color.BLACK);
     drawFitted(g, title, TITLE_FONT, PADDING, PADDING + 20, width(n) - 2 * PADDING, false);
     g.setColor(Color.DARK_GRAY);
-    drawFitted(g, "predicted tag", CAPTION_FONT, gridX, PADDING + TITLE_HEIGHT + 15, n * CELL, false);
+    drawCentred(g, "predicted tag", gridX + n * CELL / 2, PADDING + TITLE_HEIGHT + 15);
     AffineTransform saved = g.getTransform();
     g.rotate(-Math.PI / 2);
-    // rotated: x runs upwards from the bottom, so the caption sits left of the rows
-    drawFitted(g, "gold tag", CAPTION_FONT, -(gridY + n * CELL), PADDING + 15, n * CELL, false);
+    // after the rotation x runs upwards (negated), so this centres the caption beside the rows
+    drawCentred(g, "gold tag", -(gridY + n * CELL / 2), PADDING + 15);
     g.setTransform(saved);
+  }
+
+  private static void drawCentred(Graphics2D g, String text, int centreX, int y) {
+    g.setFont(CAPTION_FONT);
+    g.drawString(text, centreX - g.getFontMetrics().stringWidth(text) / 2, y);
   }
 
   private static void drawLabels(Graphics2D g, ConfusionHeatmap map, int gridX, int gridY) {

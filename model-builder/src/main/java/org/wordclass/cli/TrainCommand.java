@@ -1,5 +1,6 @@
 package org.wordclass.cli;
 
+import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.Locale;
@@ -38,11 +39,12 @@ final class TrainCommand extends BaseCommand {
     progress.finish();
     HmmModel model = new HmmEstimator(options).estimate(counts, Provenance.of(input, corpus));
     ModelFile.write(model, out);
+    AtomicOutput.makeReadable(out);
     printSummary(counts, model, progress.seconds());
     return OK;
   }
 
-  private void printSummary(TagCounts counts, HmmModel model, double seconds) throws java.io.IOException {
+  private void printSummary(TagCounts counts, HmmModel model, double seconds) throws IOException {
     out().printf(Locale.ROOT, "sentences   %d%n", counts.sentences());
     out().printf(Locale.ROOT, "tokens      %d%n", counts.tokens());
     out().printf(Locale.ROOT, "tags        %d%n", model.tags().size());

@@ -58,6 +58,18 @@ class WorkflowTest {
     assertEquals(sha256(Files.readAllBytes(trainConllu)), trained.provenance().get("corpus.1.sha256"));
     assertNotNull(trained.provenance().get("builder.version"));
     assertFalse(trained.provenance().containsValue(trainConllu.toString()));
+    assertTrue(r.err().lines().count() <= 2, () -> "without a terminal, progress is a start and an end line: " + r);
+  }
+
+  @Test
+  void undefinedFiguresAreNullInJson() throws Exception {
+    Path json = dir.resolve("seen.json");
+    Cli.Result r = Cli.run("evaluate", "--model", model.toString(), "--corpus", trainConllu.toString(), "--report", json.toString());
+    assertEquals(0, r.exitCode(), r::toString);
+    JsonNode report = JSON.readTree(json.toFile());
+    assertEquals(0, report.get("unknownTokens").asLong(), "every word of the training corpus is known");
+    assertTrue(report.get("unknownAccuracy").isNull(), report::toString);
+    assertTrue(report.get("accuracy").isNumber(), report::toString);
   }
 
   @Test
