@@ -6,8 +6,8 @@ import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Spec;
 
 /**
- * What every subcommand shares: its output streams (those of the command line, so tests can
- * capture them) and the conventions of its exit code.
+ * What every subcommand shares: its output streams, which are those of the command line so that
+ * tests can capture them. Failures are thrown, and {@link Failures} turns them into exit codes.
  */
 abstract class BaseCommand implements Callable<Integer> {
   static final int OK = 0;
@@ -21,10 +21,5 @@ abstract class BaseCommand implements Callable<Integer> {
 
   PrintWriter err() {
     return spec.commandLine().getErr();
-  }
-
-  /** The command's name as typed, for messages: {@code wordclass train}. */
-  String qualifiedName() {
-    return spec.qualifiedName();
   }
 }

@@ -12,7 +12,7 @@ import org.wordclass.corpus.Corpus;
 import org.wordclass.corpus.Sentence;
 import org.wordclass.corpus.TagColumn;
 import org.wordclass.evaluation.Evaluation;
-import org.wordclass.model.HmmModel;
+import org.wordclass.evaluation.EvaluationReport;
 import org.wordclass.training.HmmEstimator;
 import org.wordclass.training.TagCounts;
 import org.wordclass.training.TrainingOptions;
@@ -86,11 +86,10 @@ final class CrossValidateCommand extends BaseCommand {
       throw new ParameterException(spec.commandLine(),
           "--folds " + folds + " is more than the " + seen[0] + " sentences of the corpus");
     }
-    HmmModel model = new HmmEstimator(options).estimate(counts, Map.of());
-    Evaluation evaluation = new Evaluation(model);
+    Evaluation evaluation = new Evaluation(new HmmEstimator(options).estimate(counts, Map.of()));
     progress.read(input, inFold(fold, true, evaluation::add, new long[1]));
-    FoldResult result = new FoldResult(fold + 1, seen[0] / folds + (fold < seen[0] % folds ? 1 : 0),
-        evaluation.tokens(), evaluation.accuracy(), evaluation.knownAccuracy(), evaluation.unknownAccuracy());
+    EvaluationReport r = evaluation.report();
+    FoldResult result = new FoldResult(fold + 1, r.sentences(), r.tokens(), r.accuracy(), r.knownAccuracy(), r.unknownAccuracy());
     out().printf(Locale.ROOT, "fold %d/%d  accuracy %.4f  known %.4f  unknown %.4f  (%d tokens)%n",
         result.fold(), folds, result.accuracy(), result.knownAccuracy(), result.unknownAccuracy(), result.tokens());
     out().flush();

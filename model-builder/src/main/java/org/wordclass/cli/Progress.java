@@ -47,8 +47,8 @@ final class Progress {
     }
     Progress progress = new Progress(task, err, System.console() != null, bytes * passes);
     if (!progress.live) {
-      err.printf(Locale.ROOT, "%s: reading %d file(s), %s%s%n", task, corpus.files().size(), megabytes(bytes),
-          passes > 1 ? " " + passes + " times" : "");
+      err.printf(Locale.ROOT, "%s: reading %d file(s) of %s%s%n", task, corpus.files().size(), megabytes(bytes),
+          passes > 1 ? " in " + passes + " passes" : "");
       err.flush();
     }
     return progress;
@@ -72,7 +72,7 @@ final class Progress {
       draw(totalBytes);
       err.println();
     } else {
-      err.printf(Locale.ROOT, "%s: read %d sentences in %.1f s%n", task, sentences, seconds());
+      err.printf(Locale.ROOT, "%s: done in %.1f s (%d sentences read)%n", task, seconds(), sentences);
     }
     err.flush();
   }

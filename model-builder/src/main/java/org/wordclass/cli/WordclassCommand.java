@@ -1,10 +1,13 @@
 package org.wordclass.cli;
 
 import java.util.List;
+import java.util.concurrent.Callable;
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
+import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.ScopeType;
+import picocli.CommandLine.Spec;
 
 /**
  * The {@code wordclass} command line: trains, evaluates, cross-validates and inspects word-class
@@ -17,14 +20,14 @@ import picocli.CommandLine.ScopeType;
     versionProvider = BuildInfo.class,
     description = "Builds, checks and applies hidden Markov models of word classes (part-of-speech tags).",
     synopsisSubcommandLabel = "COMMAND")
-public final class WordclassCommand implements Runnable {
+public final class WordclassCommand implements Callable<Integer> {
   /** Declared once here and inherited by every subcommand, so it may follow any of them. */
   @Option(names = "--verbose", scope = ScopeType.INHERIT,
       description = "On failure, print the full stack trace as well as the one-line message.")
   boolean verbose;
 
-  @CommandLine.Spec
-  CommandLine.Model.CommandSpec spec;
+  @Spec
+  CommandSpec spec;
 
   /** The subcommands, in the order the help lists them. */
   static List<Object> subcommands() {
@@ -51,10 +54,11 @@ public final class WordclassCommand implements Runnable {
     return cli;
   }
 
-  /** Without a subcommand: show what there is to choose from. */
+  /** Without a subcommand: show what there is to choose from, as for any incomplete command line. */
   @Override
-  public void run() {
+  public Integer call() {
     spec.commandLine().usage(spec.commandLine().getErr());
+    return spec.exitCodeOnInvalidInput();
   }
 
   public static void main(String[] args) {
