@@ -1,0 +1,52 @@
+package org.wordclass.cli;
+
+import java.io.IOException;
+import java.io.OutputStream;
+import java.nio.file.AtomicMoveNotSupportedException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.nio.file.StandardCopyOption;
+import java.nio.file.attribute.PosixFileAttributeView;
+import java.nio.file.attribute.PosixFilePermissions;
+
+/**
+ * Writes report files through a temporary file in the same folder that is moved into place, so a
+ * failed or interrupted run never leaves a half-written report where a whole one was expected.
+ */
+final class AtomicOutput {
+  /** Writes the content to a stream. */
+  interface Content {
+    void writeTo(OutputStream out) throws IOException;
+  }
+
+  private AtomicOutput() {}
+
+  static void write(Path target, Content content) throws IOException {
+    Path dir = target.toAbsolutePath().getParent();
+    Files.createDirectories(dir);
+    Path tmp = Files.createTempFile(dir, target.getFileName().toString(), ".tmp");
+    try {
+      try (OutputStream out = Files.newOutputStream(tmp)) {
+        content.writeTo(out);
+      }
+      makeReadable(tmp);
+      try {
+        Files.move(tmp, target, StandardCopyOption.REPLACE_EXISTING, StandardCopyOption.ATOMIC_MOVE);
+      } catch (AtomicMoveNotSupportedException e) {
+        Files.move(tmp, target, StandardCopyOption.REPLACE_EXISTING);
+      }
+    } finally {
+      Files.deleteIfExists(tmp);
+    }
+  }
+
+  /**
+   * Temporary files are created readable by their owner only; a report or model is meant to be
+   * shared, so it gets the usual rw-r--r-- where the file system has POSIX permissions.
+   */
+  static void makeReadable(Path file) throws IOException {
+    if (Files.getFileAttributeView(file, PosixFileAttributeView.class) != null) {
+      Files.setPosixFilePermissions(file, PosixFilePermissions.fromString("rw-r--r--"));
+    }
+  }
+}
