@@ -2,12 +2,9 @@ package org.wordclass.model;
 
 import java.io.IOException;
 import java.io.InputStream;
-import java.io.OutputStream;
 import java.nio.ByteBuffer;
-import java.nio.file.AtomicMoveNotSupportedException;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import java.nio.file.StandardCopyOption;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Map;
@@ -53,22 +50,11 @@ public final class ModelFile {
 
   /** Writes {@code model} to {@code target} atomically (temporary file, then move). */
   public static void write(HmmModel model, Path target) throws IOException {
-    Path dir = target.toAbsolutePath().getParent();
-    Files.createDirectories(dir);
-    Path tmp = Files.createTempFile(dir, target.getFileName().toString(), ".tmp");
-    try {
-      try (OutputStream stream = Files.newOutputStream(tmp);
-          IndexOutput out = new OutputStreamIndexOutput(target.toString(), target.getFileName().toString(), stream, 1 << 16)) {
+    AtomicFiles.write(target, stream -> {
+      try (IndexOutput out = new OutputStreamIndexOutput(target.toString(), target.getFileName().toString(), stream, 1 << 16)) {
         write(model, out);
       }
-      try {
-        Files.move(tmp, target, StandardCopyOption.REPLACE_EXISTING, StandardCopyOption.ATOMIC_MOVE);
-      } catch (AtomicMoveNotSupportedException e) {
-        Files.move(tmp, target, StandardCopyOption.REPLACE_EXISTING);
-      }
-    } finally {
-      Files.deleteIfExists(tmp);
-    }
+    });
   }
 
   /** Writes {@code model} to {@code out}, header to footer. */

@@ -1,5 +1,7 @@
 package org.wordclass.cli;
 
+import org.wordclass.model.AtomicFiles;
+
 import java.awt.BasicStroke;
 import java.awt.Color;
 import java.awt.Font;
@@ -47,7 +49,7 @@ final class HeatmapImage {
 
   static void write(Path target, ConfusionHeatmap map, String title) throws IOException {
     BufferedImage image = draw(map, title);
-    AtomicOutput.write(target, out -> {
+    AtomicFiles.write(target, out -> {
       if (!ImageIO.write(image, "png", out)) {
         throw new IOException("this Java runtime cannot write PNG images");
       }

@@ -1,5 +1,7 @@
 package org.wordclass.cli;
 
+import org.wordclass.model.AtomicFiles;
+
 import java.io.IOException;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Path;
@@ -30,7 +32,7 @@ final class HtmlReport {
 
   static void write(Path target, EvaluationReport report, String title) throws IOException {
     String html = render(report, title);
-    AtomicOutput.write(target, out -> out.write(html.getBytes(StandardCharsets.UTF_8)));
+    AtomicFiles.write(target, out -> out.write(html.getBytes(StandardCharsets.UTF_8)));
   }
 
   static String render(EvaluationReport report, String title) {

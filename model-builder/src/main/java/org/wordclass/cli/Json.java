@@ -1,5 +1,7 @@
 package org.wordclass.cli;
 
+import org.wordclass.model.AtomicFiles;
+
 import com.fasterxml.jackson.core.JsonGenerator;
 import com.fasterxml.jackson.databind.ObjectMapper;
 import com.fasterxml.jackson.databind.SerializationFeature;
@@ -24,7 +26,7 @@ final class Json {
   private Json() {}
 
   static void write(Path target, Object value) throws IOException {
-    AtomicOutput.write(target, out -> MAPPER.writeValue(out, value));
+    AtomicFiles.write(target, out -> MAPPER.writeValue(out, value));
   }
 
   static String toString(Object value) throws IOException {

@@ -1,5 +1,7 @@
 package org.wordclass.cli;
 
+import org.wordclass.model.AtomicFiles;
+
 import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
@@ -39,7 +41,6 @@ final class TrainCommand extends BaseCommand {
     progress.finish();
     HmmModel model = new HmmEstimator(options).estimate(counts, Provenance.of(input, corpus));
     ModelFile.write(model, out);
-    AtomicOutput.makeReadable(out);
     printSummary(counts, model, progress.seconds());
     return OK;
   }

@@ -4,14 +4,12 @@ import java.lang.reflect.Field;
 import java.util.Locale;
 import org.wordclass.training.TrainingOptions;
 import picocli.CommandLine.IDefaultValueProvider;
-import picocli.CommandLine.ITypeConverter;
 import picocli.CommandLine.Model.ArgSpec;
 import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Model.OptionSpec;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.ParameterException;
 import picocli.CommandLine.Spec;
-import picocli.CommandLine.TypeConversionException;
 
 /**
  * One option per {@link TrainingOptions} field (a mixin). The defaults are those of {@link
@@ -34,10 +32,11 @@ final class TrainingOptionsMixin {
       description = "Words seen at most this often teach the unknown-word model. Default: ${DEFAULT-VALUE}.")
   int rareWordMaxCount;
 
-  @Option(names = "--suffix-weight", paramLabel = "W|auto", converter = SuffixWeight.class,
-      description = "Weight of shorter endings when longer ones are combined with them: a positive number, "
-          + "or auto for the standard deviation of the tag probabilities. Default: ${DEFAULT-VALUE}.")
-  double suffixWeight;
+  @Option(names = "--suffix-weight", paramLabel = "W|held-out|tag-spread",
+      description = "Weight of shorter endings when longer ones are combined with them: a positive number; "
+          + "held-out to choose it by scoring each rare training word as if unseen; tag-spread for the "
+          + "standard deviation of the tag probabilities. Default: ${DEFAULT-VALUE}.")
+  String suffixWeight;
 
   @Option(names = "--open-class-min-share", paramLabel = "SHARE",
       description = "A tag may be given to unknown words when at least this share (0 to 1) of the words "
@@ -54,24 +53,26 @@ final class TrainingOptionsMixin {
   /** The options given; a value the estimator refuses is reported as a usage error. */
   TrainingOptions toOptions() {
     try {
-      return new TrainingOptions(order, maxSuffixLength, rareWordMaxCount, suffixWeight, openClassMinShare, shapeClasses);
+      TrainingOptions options = new TrainingOptions(order, maxSuffixLength, rareWordMaxCount,
+          TrainingOptions.SuffixWeightRule.HELD_OUT, Double.NaN, openClassMinShare, shapeClasses);
+      return withSuffixWeight(options, suffixWeight);
     } catch (IllegalArgumentException e) {
       throw new ParameterException(mixee.commandLine(), "Invalid training option: " + e.getMessage());
     }
   }
 
-  /** Reads {@code auto} as NaN, which the estimator takes as "choose from the data". */
-  static final class SuffixWeight implements ITypeConverter<Double> {
-    @Override
-    public Double convert(String value) {
-      if (value.equalsIgnoreCase("auto")) {
-        return Double.NaN;
+  /** Reads a rule name or a number. */
+  private TrainingOptions withSuffixWeight(TrainingOptions options, String value) {
+    for (TrainingOptions.SuffixWeightRule rule : TrainingOptions.SuffixWeightRule.values()) {
+      if (rule != TrainingOptions.SuffixWeightRule.FIXED && value.equalsIgnoreCase(rule.name().replace('_', '-'))) {
+        return options.withSuffixWeightRule(rule);
       }
-      try {
-        return Double.valueOf(value);
-      } catch (NumberFormatException e) {
-        throw new TypeConversionException("'" + value + "' is neither a number nor auto");
-      }
+    }
+    try {
+      return options.withSuffixWeight(Double.parseDouble(value));
+    } catch (NumberFormatException e) {
+      throw new ParameterException(mixee.commandLine(),
+          "Invalid value for --suffix-weight: '" + value + "' is neither a number nor held-out or tag-spread");
     }
   }
 

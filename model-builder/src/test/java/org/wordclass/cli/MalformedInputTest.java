@@ -123,7 +123,7 @@ class MalformedInputTest {
     return Stream.of(
         Arguments.of(List.of("--order", "3"), "order must be 1 or 2"),
         Arguments.of(List.of("--order", "two"), "--order"),
-        Arguments.of(List.of("--suffix-weight", "heavy"), "neither a number nor auto"),
+        Arguments.of(List.of("--suffix-weight", "heavy"), "neither a number nor held-out or tag-spread"),
         Arguments.of(List.of("--suffix-weight", "-1"), "suffix weight must be positive"),
         Arguments.of(List.of("--open-class-min-share", "1.5"), "open-class share"),
         Arguments.of(List.of("--max-suffix-length", "-2"), "suffix length"),

@@ -103,9 +103,9 @@ class WorkflowTest {
     assertEquals("3", provenance.get("option.rareWordMaxCount"));
     assertEquals("0.01", provenance.get("option.openClassMinShare"));
     assertEquals(0, Cli.run("train", "--corpus", trainConllu.toString(), "--out", out.toString(),
-        "--shape-classes", "--suffix-weight", "auto").exitCode());
+        "--shape-classes", "--suffix-weight", "tag-spread").exitCode());
     assertEquals("true", ModelFile.read(out).provenance().get("option.shapeClasses"));
-    assertEquals("auto", ModelFile.read(out).provenance().get("option.suffixWeight"));
+    assertEquals("tag-spread", ModelFile.read(out).provenance().get("option.suffixWeight"));
   }
 
   @Test

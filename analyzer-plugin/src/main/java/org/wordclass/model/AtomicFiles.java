@@ -1,4 +1,4 @@
-package org.wordclass.cli;
+package org.wordclass.model;
 
 import java.io.IOException;
 import java.io.OutputStream;
@@ -10,18 +10,19 @@ import java.nio.file.attribute.PosixFileAttributeView;
 import java.nio.file.attribute.PosixFilePermissions;
 
 /**
- * Writes report files through a temporary file in the same folder that is moved into place, so a
- * failed or interrupted run never leaves a half-written report where a whole one was expected.
+ * Writes files (models, reports) through a temporary file in the same folder that is moved into
+ * place, so a failed or interrupted run never leaves a half-written file where a whole one was
+ * expected, and a previous file stays untouched until the new one is complete.
  */
-final class AtomicOutput {
+public final class AtomicFiles {
   /** Writes the content to a stream. */
-  interface Content {
+  public interface Content {
     void writeTo(OutputStream out) throws IOException;
   }
 
-  private AtomicOutput() {}
+  private AtomicFiles() {}
 
-  static void write(Path target, Content content) throws IOException {
+  public static void write(Path target, Content content) throws IOException {
     Path dir = target.toAbsolutePath().getParent();
     Files.createDirectories(dir);
     Path tmp = Files.createTempFile(dir, target.getFileName().toString(), ".tmp");
@@ -44,7 +45,7 @@ final class AtomicOutput {
    * Temporary files are created readable by their owner only; a report or model is meant to be
    * shared, so it gets the usual rw-r--r-- where the file system has POSIX permissions.
    */
-  static void makeReadable(Path file) throws IOException {
+  private static void makeReadable(Path file) throws IOException {
     if (Files.getFileAttributeView(file, PosixFileAttributeView.class) != null) {
       Files.setPosixFilePermissions(file, PosixFilePermissions.fromString("rw-r--r--"));
     }
