@@ -12,7 +12,11 @@ import java.util.Random;
 import java.util.Set;
 import org.junit.jupiter.api.Test;
 
-/** Lookups in the lexicon's hash table, from Strings and from slices of char buffers. */
+/**
+ * Lookups in the lexicon's hash table, from Strings and from slices of char buffers, checked
+ * against the definition (a word is found exactly when it was given) and, for many words, against
+ * java.util.HashSet.
+ */
 class LexiconTest {
   private static Lexicon.Entry entry(String word, int... tags) {
     float[] emissions = new float[tags.length];

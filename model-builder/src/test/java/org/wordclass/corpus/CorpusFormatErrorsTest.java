@@ -12,7 +12,12 @@ import java.util.List;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
-/** Each malformed input is refused with the exact file name, line number and problem. */
+/**
+ * Each malformed input is refused with the exact file name, line number and problem, in the form
+ * {@link CorpusFormatException} documents ("file:line: problem"); what counts as malformed follows
+ * the CoNLL-U format description of Universal Dependencies and the UTF-8 definition (RFC 3629:
+ * a lone continuation byte such as 0x80, or 0xC3 followed by a non-continuation byte, is invalid).
+ */
 class CorpusFormatErrorsTest {
   @TempDir Path dir;
 

@@ -10,7 +10,7 @@ import java.util.List;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
-/** The plain format: token TAB tag per line, blank lines between sentences; invented data. */
+/** The plain format as {@link PlainTagReader} defines it: token TAB tag per line, blank lines between sentences; invented data. */
 class PlainTagReaderTest {
   @TempDir Path dir;
 
