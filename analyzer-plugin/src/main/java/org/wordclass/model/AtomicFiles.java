@@ -8,6 +8,7 @@ import java.nio.file.Path;
 import java.nio.file.StandardCopyOption;
 import java.nio.file.attribute.PosixFileAttributeView;
 import java.nio.file.attribute.PosixFilePermissions;
+import org.apache.lucene.util.IOUtils;
 
 /**
  * Writes files (models, reports) through a temporary file in the same folder that is moved into
@@ -31,11 +32,14 @@ public final class AtomicFiles {
         content.writeTo(out);
       }
       makeReadable(tmp);
+      // on disk before it takes the target's name, so a crash cannot leave the name on a partial file
+      IOUtils.fsync(tmp, false);
       try {
         Files.move(tmp, target, StandardCopyOption.REPLACE_EXISTING, StandardCopyOption.ATOMIC_MOVE);
       } catch (AtomicMoveNotSupportedException e) {
         Files.move(tmp, target, StandardCopyOption.REPLACE_EXISTING);
       }
+      IOUtils.fsync(dir, true);
     } finally {
       Files.deleteIfExists(tmp);
     }
