@@ -1,14 +1,15 @@
 package org.wordclass.model;
 
+import java.io.EOFException;
 import java.io.IOException;
 import java.io.InputStream;
-import java.io.OutputStream;
+import java.io.UncheckedIOException;
 import java.nio.ByteBuffer;
-import java.nio.file.AtomicMoveNotSupportedException;
+import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import java.nio.file.StandardCopyOption;
 import java.util.ArrayList;
+import java.util.Arrays;
 import java.util.List;
 import java.util.Map;
 import java.util.TreeMap;
@@ -18,6 +19,7 @@ import org.apache.lucene.index.IndexFormatTooNewException;
 import org.apache.lucene.index.IndexFormatTooOldException;
 import org.apache.lucene.store.BufferedChecksumIndexInput;
 import org.apache.lucene.store.ByteBuffersDataInput;
+import org.apache.lucene.store.ByteBuffersDataOutput;
 import org.apache.lucene.store.ByteBuffersIndexInput;
 import org.apache.lucene.store.ChecksumIndexInput;
 import org.apache.lucene.store.DataInput;
@@ -25,6 +27,7 @@ import org.apache.lucene.store.DataOutput;
 import org.apache.lucene.store.IndexInput;
 import org.apache.lucene.store.IndexOutput;
 import org.apache.lucene.store.OutputStreamIndexOutput;
+import org.apache.lucene.util.IOUtils;
 
 /**
  * Reads and writes the model file format ({@code .wcm}), described in {@code docs/model-format.md}:
@@ -49,26 +52,18 @@ public final class ModelFile {
   /** Largest model file this reader accepts, a guard against reading a wrong file whole. */
   public static final long MAX_FILE_BYTES = 1L << 30;
 
+  /** Magic and codec name as {@link CodecUtil#writeHeader} writes them: how every model file starts. */
+  private static final byte[] HEADER_PREFIX = headerPrefix();
+
   private ModelFile() {}
 
   /** Writes {@code model} to {@code target} atomically (temporary file, then move). */
   public static void write(HmmModel model, Path target) throws IOException {
-    Path dir = target.toAbsolutePath().getParent();
-    Files.createDirectories(dir);
-    Path tmp = Files.createTempFile(dir, target.getFileName().toString(), ".tmp");
-    try {
-      try (OutputStream stream = Files.newOutputStream(tmp);
-          IndexOutput out = new OutputStreamIndexOutput(target.toString(), target.getFileName().toString(), stream, 1 << 16)) {
+    AtomicFiles.write(target, stream -> {
+      try (IndexOutput out = new OutputStreamIndexOutput(target.toString(), target.getFileName().toString(), stream, 1 << 16)) {
         write(model, out);
       }
-      try {
-        Files.move(tmp, target, StandardCopyOption.REPLACE_EXISTING, StandardCopyOption.ATOMIC_MOVE);
-      } catch (AtomicMoveNotSupportedException e) {
-        Files.move(tmp, target, StandardCopyOption.REPLACE_EXISTING);
-      }
-    } finally {
-      Files.deleteIfExists(tmp);
-    }
+    });
   }
 
   /** Writes {@code model} to {@code out}, header to footer. */
@@ -202,7 +197,7 @@ public final class ModelFile {
       HmmModel model = readBody(in, version, name);
       CodecUtil.checkFooter(in);
       return model;
-    } catch (CorruptIndexException | IllegalArgumentException | IndexOutOfBoundsException e) {
+    } catch (CorruptIndexException | EOFException | IllegalArgumentException | IndexOutOfBoundsException e) {
       throw new ModelFormatException(name + ": the model file is inconsistent: " + e.getMessage(), e);
     }
   }
@@ -210,6 +205,15 @@ public final class ModelFile {
   private static void checkHeader(IndexInput in, String name) throws IOException {
     if (in.length() < CodecUtil.headerLength(CODEC)) {
       throw new ModelFormatException(name + ": not a word-class model file (only " + in.length() + " bytes)");
+    }
+    // compared here, since CodecUtil would first read a codec name of whatever length a foreign
+    // or damaged file declares
+    byte[] start = new byte[HEADER_PREFIX.length];
+    in.readBytes(start, 0, start.length);
+    in.seek(0);
+    if (!Arrays.equals(start, HEADER_PREFIX)) {
+      throw new ModelFormatException(name + ": not a word-class model file (its header does not name the "
+          + CODEC + " format)");
     }
     try {
       CodecUtil.checkHeader(in, CODEC, VERSION_START, VERSION_CURRENT);
@@ -225,6 +229,16 @@ public final class ModelFile {
       throw new ModelFormatException(name + ": not a word-class model file (its header does not name the "
           + CODEC + " format)", e);
     }
+  }
+
+  private static byte[] headerPrefix() {
+    ByteBuffersDataOutput out = new ByteBuffersDataOutput();
+    try {
+      CodecUtil.writeHeader(out, CODEC, VERSION_CURRENT);
+    } catch (IOException e) {
+      throw new UncheckedIOException(e);
+    }
+    return Arrays.copyOf(out.toArrayCopy(), CodecUtil.headerLength(CODEC) - Integer.BYTES);
   }
 
   private static void verifyChecksum(IndexInput in, String name) throws IOException {
@@ -243,7 +257,7 @@ public final class ModelFile {
     int tagCount = limits.count(in.readVInt(), 1, "tags");
     List<String> names = new ArrayList<>(tagCount);
     for (int i = 0; i < tagCount; i++) {
-      names.add(in.readString());
+      names.add(limits.string());
     }
     TagSet tags = new TagSet(names);
     StateSpace states = readStates(in, limits, tagCount);
@@ -266,13 +280,21 @@ public final class ModelFile {
       }
       return (int) declared;
     }
+
+    /** A string as {@link DataOutput#writeString} writes it, its length checked before allocating. */
+    String string() throws IOException {
+      int length = count(in.readVInt(), 1, "bytes of a string");
+      byte[] bytes = new byte[length];
+      in.readBytes(bytes, 0, length);
+      return new String(bytes, StandardCharsets.UTF_8);
+    }
   }
 
   private static Map<String, String> readMap(DataInput in, Limits limits) throws IOException {
     int size = limits.count(in.readVInt(), 2, "provenance entries");
     Map<String, String> map = new TreeMap<>();
     for (int i = 0; i < size; i++) {
-      map.put(in.readString(), in.readString());
+      map.put(limits.string(), limits.string());
     }
     return map;
   }
@@ -315,7 +337,7 @@ public final class ModelFile {
     int words = limits.count(in.readVInt(), 4, "lexicon words");
     List<Lexicon.Entry> entries = new ArrayList<>(words);
     for (int w = 0; w < words; w++) {
-      String word = in.readString();
+      String word = limits.string();
       int n = limits.count(in.readVInt(), 5, "states of a word");
       boolean contexts = in.readByte() != 0;
       int[] wordStates = new int[n];

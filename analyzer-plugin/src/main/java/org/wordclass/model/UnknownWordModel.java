@@ -193,6 +193,11 @@ public final class UnknownWordModel {
     return tries;
   }
 
+  /** The ending counts words of {@code shape} are scored with; shapes may share one. */
+  public SuffixTrie suffixTrie(WordShape shape) {
+    return tries[trieOfShape[shape.ordinal()]];
+  }
+
   /** Approximate heap size in bytes. */
   public long ramBytesUsed() {
     long bytes = 16L * (openTags.length + logPrior.length);

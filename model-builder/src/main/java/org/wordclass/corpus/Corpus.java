@@ -19,6 +19,8 @@ public final class Corpus implements Iterable<Sentence> {
   private final CorpusFormat format;
   private final TagColumn column;
   private final Map<String, String> sha256 = new LinkedHashMap<>();
+  private long passBytesDone;
+  private SentenceReader passReader;
 
   /**
    * @param format the format of every file, or null to guess it from each file's name
@@ -45,6 +47,15 @@ public final class Corpus implements Iterable<Sentence> {
     return sha256;
   }
 
+  /**
+   * Bytes of the files (as stored) read so far by the pass started last, for progress display;
+   * compare with the sum of the files' sizes.
+   */
+  public long bytesRead() {
+    SentenceReader current = passReader;
+    return passBytesDone + (current == null ? 0 : current.bytesRead());
+  }
+
   /** Reads every sentence of every file in order. */
   public void forEachSentence(Consumer<Sentence> action) {
     for (Sentence s : this) {
@@ -54,6 +65,8 @@ public final class Corpus implements Iterable<Sentence> {
 
   @Override
   public Iterator<Sentence> iterator() {
+    passBytesDone = 0;
+    passReader = null;
     return new Iterator<>() {
       private int fileIndex = -1;
       private SentenceReader reader;
@@ -64,6 +77,8 @@ public final class Corpus implements Iterable<Sentence> {
           while (reader == null || !reader.hasNext()) {
             if (reader != null) {
               sha256.put(files.get(fileIndex).getFileName().toString(), reader.sha256());
+              passBytesDone += reader.bytesRead();
+              passReader = null;
               reader.close();
               reader = null;
             }
@@ -73,6 +88,7 @@ public final class Corpus implements Iterable<Sentence> {
             fileIndex++;
             Path path = files.get(fileIndex);
             reader = SentenceReader.open(path, format != null ? format : CorpusFormat.guess(path), column);
+            passReader = reader;
           }
           return true;
         } catch (IOException e) {

@@ -60,6 +60,11 @@ public abstract class SentenceReader implements Iterator<Sentence>, Closeable {
     return s;
   }
 
+  /** Bytes of the file read so far, for progress display (see {@link Utf8LineReader#bytesRead}). */
+  public long bytesRead() {
+    return lines.bytesRead();
+  }
+
   /** SHA-256 of the file, once it has been read to the end. */
   public String sha256() {
     return lines.sha256();

@@ -3,6 +3,7 @@ package org.wordclass.corpus;
 import java.io.BufferedInputStream;
 import java.io.ByteArrayOutputStream;
 import java.io.Closeable;
+import java.io.FilterInputStream;
 import java.io.IOException;
 import java.io.InputStream;
 import java.io.UncheckedIOException;
@@ -23,12 +24,13 @@ import java.util.zip.GZIPInputStream;
  * Reads a text file line by line as strict UTF-8, decoding each line on its own so that a broken
  * byte sequence is reported on the line that holds it. Files ending in {@code .gz} are
  * decompressed on the fly. The SHA-256 of the bytes as stored is computed while reading, for the
- * provenance of models built from the file.
+ * provenance of models built from the file, and the bytes read are counted, for progress display.
  */
 public final class Utf8LineReader implements Closeable {
   private final String name;
   private final InputStream in;
   private final MessageDigest digest;
+  private final ByteCounter counter;
   private final CharsetDecoder decoder = StandardCharsets.UTF_8.newDecoder()
       .onMalformedInput(CodingErrorAction.REPORT)
       .onUnmappableCharacter(CodingErrorAction.REPORT);
@@ -43,7 +45,8 @@ public final class Utf8LineReader implements Closeable {
     } catch (NoSuchAlgorithmException e) {
       throw new IllegalStateException("the Java runtime has no SHA-256", e);
     }
-    InputStream raw = new DigestInputStream(new BufferedInputStream(Files.newInputStream(path), 1 << 16), digest);
+    this.counter = new ByteCounter(Files.newInputStream(path));
+    InputStream raw = new DigestInputStream(new BufferedInputStream(counter, 1 << 16), digest);
     if (path.getFileName().toString().endsWith(".gz")) {
       try {
         raw = new BufferedInputStream(new GZIPInputStream(raw, 1 << 16), 1 << 16);
@@ -62,6 +65,14 @@ public final class Utf8LineReader implements Closeable {
   /** Number of the line most recently returned (1-based). */
   public long lineNumber() {
     return lineNumber;
+  }
+
+  /**
+   * Bytes of the file as stored (compressed, for {@code .gz}) read so far; reading goes ahead in
+   * blocks of 64 KiB, so this runs ahead of the lines returned by up to that much.
+   */
+  public long bytesRead() {
+    return counter.count;
   }
 
   /** Whether the file had any byte at all. */
@@ -122,5 +133,39 @@ public final class Utf8LineReader implements Closeable {
   @Override
   public void close() throws IOException {
     in.close();
+  }
+
+  /** Counts the bytes taken from the file; sits below the buffer, so it is called once per block. */
+  private static final class ByteCounter extends FilterInputStream {
+    private long count;
+
+    ByteCounter(InputStream in) {
+      super(in);
+    }
+
+    @Override
+    public int read() throws IOException {
+      int b = super.read();
+      if (b >= 0) {
+        count++;
+      }
+      return b;
+    }
+
+    @Override
+    public int read(byte[] buffer, int off, int len) throws IOException {
+      int n = super.read(buffer, off, len);
+      if (n > 0) {
+        count += n;
+      }
+      return n;
+    }
+
+    @Override
+    public long skip(long n) throws IOException {
+      long skipped = super.skip(n);
+      count += skipped;
+      return skipped;
+    }
   }
 }

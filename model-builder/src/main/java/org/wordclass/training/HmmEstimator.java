@@ -129,13 +129,15 @@ public final class HmmEstimator {
         rareByTag[tag] += e.getValue();
       }
     }
+    // the overall tag distribution counts as one extra rare word, so that no open tag has zero mass
     double[] base = new double[openTags.length];
-    long rareOpen = 0;
-    for (int t : openTags) {
-      rareOpen += rareByTag[t];
+    double mass = 0;
+    for (int k = 0; k < openTags.length; k++) {
+      base[k] = rareByTag[openTags[k]] + (double) tagTokens[openTags[k]] / total;
+      mass += base[k];
     }
     for (int k = 0; k < openTags.length; k++) {
-      base[k] = (double) rareByTag[openTags[k]] / rareOpen;
+      base[k] /= mass;
     }
     SuffixTrie[] tries = new SuffixTrie[trieCount];
     for (int i = 0; i < trieCount; i++) {
@@ -164,17 +166,16 @@ public final class HmmEstimator {
       }
     }
     List<Integer> open = new ArrayList<>();
-    int mostFrequent = 0;
     for (int t = 0; t < tagCount; t++) {
       if (hapaxByTag[t] > 0 && hapaxByTag[t] >= options.openClassMinShare() * hapaxes) {
         open.add(t);
       }
-      if (hapaxByTag[t] > hapaxByTag[mostFrequent]) {
-        mostFrequent = t;
-      }
     }
     if (open.isEmpty()) {
-      open.add(mostFrequent);
+      // no word was seen once (a tiny or artificial corpus): every tag may take unknown words
+      for (int t = 0; t < tagCount; t++) {
+        open.add(t);
+      }
     }
     return open.stream().mapToInt(Integer::intValue).toArray();
   }

@@ -1,0 +1,135 @@
+package org.wordclass.model;
+
+import static org.junit.jupiter.api.Assertions.assertArrayEquals;
+import static org.junit.jupiter.api.Assertions.assertEquals;
+
+import java.nio.ByteBuffer;
+import java.nio.ByteOrder;
+import java.nio.charset.StandardCharsets;
+import java.util.Arrays;
+import java.util.List;
+import java.util.zip.CRC32;
+import org.junit.jupiter.api.Test;
+import org.wordclass.testing.TestModels;
+
+/**
+ * Reads a written model with a parser of its own that follows docs/model-format.md field by
+ * field, with java.nio and java.util.zip only (no Lucene): the document must describe exactly
+ * what {@link ModelFile} writes, byte order included.
+ */
+class DocumentedLayoutTest {
+  private final HmmModel model = TestModels.small();
+  private final byte[] bytes = TestModels.bytes(model);
+  private final ByteBuffer in = ByteBuffer.wrap(bytes).order(ByteOrder.LITTLE_ENDIAN);
+
+  @Test
+  void fileFollowsTheDocumentedLayout() {
+    header();
+    assertEquals(model.provenance().size(), vint());
+    for (var e : model.provenance().entrySet()) {
+      assertEquals(List.of(e.getKey(), e.getValue()), List.of(string(), string()));
+    }
+    assertEquals(model.order(), in.get());
+    assertEquals(model.tags().size(), vint());
+    for (String name : model.tags().names()) {
+      assertEquals(name, string());
+    }
+    assertArrayEquals(model.logBigramTable(), doubles(model.logBigramTable().length));
+    assertArrayEquals(model.logTrigramTable(), doubles(model.logTrigramTable().length));
+    lexicon(model.lexicon());
+    unknownWords(model.unknownWords());
+    footer();
+  }
+
+  private void header() {
+    byte[] expected = {0x3f, (byte) 0xd7, 0x6c, 0x17, 0x0c, 'W', 'o', 'r', 'd', 'C', 'l', 'a', 's', 's', 'H', 'm', 'm', 0, 0, 0, 1};
+    assertArrayEquals(expected, Arrays.copyOf(bytes, 21));
+    in.position(21);
+  }
+
+  private void lexicon(Lexicon lexicon) {
+    assertEquals(lexicon.size(), vint());
+    for (Lexicon.Entry e : lexicon.entries()) {
+      assertEquals(e.word(), string());
+      assertEquals(e.tags().length, vint());
+      for (int k = 0; k < e.tags().length; k++) {
+        assertEquals(e.tags()[k], vint());
+        assertEquals(e.logEmissions()[k], Float.intBitsToFloat(in.getInt()));
+      }
+    }
+  }
+
+  private void unknownWords(UnknownWordModel u) {
+    assertEquals(u.theta(), in.getDouble());
+    assertEquals(u.maxSuffixLength(), vint());
+    assertEquals(u.openTagCount(), vint());
+    for (int t : u.openTags()) {
+      assertEquals(t, vint());
+    }
+    assertArrayEquals(u.logPrior(), doubles(model.tags().size()));
+    assertArrayEquals(u.baseDistribution(), doubles(u.openTagCount()));
+    for (int t : u.trieOfShape()) {
+      assertEquals(t, vint());
+    }
+    assertEquals(u.tries().length, vint());
+    for (SuffixTrie trie : u.tries()) {
+      trie(trie);
+    }
+  }
+
+  /** Breadth-first nodes: counts, then child characters; edge e leads to node e + 1. */
+  private void trie(SuffixTrie trie) {
+    int nodes = vint();
+    assertEquals(trie.nodeCount(), nodes);
+    int edges = 0;
+    for (int n = 0; n < nodes; n++) {
+      int counts = vint();
+      for (int i = 0; i < counts; i++) {
+        assertEquals(trie.countTag[trie.countStart[n] + i], vint());
+        assertEquals(trie.countValue[trie.countStart[n] + i], vint());
+      }
+      int children = vint();
+      for (int i = 0; i < children; i++) {
+        char c = (char) vint();
+        assertEquals(edges + 1, trie.child(n, c), "node reached by edge " + edges);
+        edges++;
+      }
+    }
+    assertEquals(nodes - 1, edges);
+  }
+
+  private void footer() {
+    assertEquals(bytes.length - 16, in.position(), "the footer follows the last field");
+    in.order(ByteOrder.BIG_ENDIAN);
+    assertEquals(0xC02893E8, in.getInt());
+    assertEquals(0, in.getInt());
+    CRC32 crc = new CRC32();
+    crc.update(bytes, 0, bytes.length - 8);
+    assertEquals(crc.getValue(), in.getLong());
+  }
+
+  private int vint() {
+    int value = 0;
+    for (int shift = 0; ; shift += 7) {
+      byte b = in.get();
+      value |= (b & 0x7F) << shift;
+      if (b >= 0) {
+        return value;
+      }
+    }
+  }
+
+  private String string() {
+    byte[] utf8 = new byte[vint()];
+    in.get(utf8);
+    return new String(utf8, StandardCharsets.UTF_8);
+  }
+
+  private double[] doubles(int count) {
+    double[] out = new double[count];
+    for (int i = 0; i < count; i++) {
+      out[i] = in.getDouble();
+    }
+    return out;
+  }
+}

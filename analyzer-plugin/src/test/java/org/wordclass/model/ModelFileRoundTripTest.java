@@ -1,0 +1,136 @@
+package org.wordclass.model;
+
+import static org.junit.jupiter.api.Assertions.assertArrayEquals;
+import static org.junit.jupiter.api.Assertions.assertEquals;
+
+import java.io.IOException;
+import java.io.InputStream;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.HashMap;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.Random;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+import org.wordclass.testing.TestModels;
+
+/** Writing and reading a model file gives back the same model; the same model gives the same bytes. */
+class ModelFileRoundTripTest {
+  /** Words whose unknown-word scores are compared, one or more per shape and ending in the tries. */
+  private static final List<String> PROBES = List.of("walked", "talked", "stable", "Bern", "BERN", "x", "", "42", "...", "ending");
+
+  @TempDir Path dir;
+
+  @Test
+  void smallModelSurvivesWriteAndRead() throws IOException {
+    HmmModel model = TestModels.small();
+    assertSameModel(model, ModelFile.read(TestModels.bytes(model), "small"));
+  }
+
+  @Test
+  void randomModelsSurviveWriteAndReadThroughFiles() throws IOException {
+    Random seeds = new Random(8L);
+    for (int i = 0; i < 50; i++) {
+      long seed = seeds.nextLong();
+      HmmModel model = TestModels.random(new Random(seed), 1 + (i % 2));
+      Path file = dir.resolve("m" + i + ".wcm");
+      ModelFile.write(model, file);
+      assertSameModel(model, ModelFile.read(file));
+    }
+  }
+
+  @Test
+  void writingIsDeterministic() throws IOException {
+    ModelFile.write(TestModels.small(), dir.resolve("a.wcm"));
+    ModelFile.write(TestModels.small(), dir.resolve("b.wcm"));
+    assertArrayEquals(Files.readAllBytes(dir.resolve("a.wcm")), Files.readAllBytes(dir.resolve("b.wcm")));
+    assertArrayEquals(Files.readAllBytes(dir.resolve("a.wcm")), TestModels.bytes(TestModels.small()));
+  }
+
+  @Test
+  void provenanceOrderOfInsertionDoesNotChangeTheBytes() {
+    HmmModel model = TestModels.small();
+    Map<String, String> reversed = new LinkedHashMap<>();
+    List<String> keys = List.copyOf(model.provenance().keySet());
+    for (int i = keys.size() - 1; i >= 0; i--) {
+      reversed.put(keys.get(i), model.provenance().get(keys.get(i)));
+    }
+    assertArrayEquals(TestModels.bytes(model), TestModels.bytes(withProvenance(model, reversed)));
+  }
+
+  /** The bundled model, read and written again, gives back its own bytes. */
+  @Test
+  void bundledModelRewritesToTheSameBytes() throws IOException {
+    byte[] original = bundledBytes();
+    HmmModel model = ModelFile.read(original, DefaultModel.RESOURCE);
+    assertArrayEquals(original, TestModels.bytes(model));
+    assertSameModel(DefaultModel.get(), model);
+  }
+
+  static byte[] bundledBytes() throws IOException {
+    try (InputStream in = ModelFileRoundTripTest.class.getClassLoader().getResourceAsStream(DefaultModel.RESOURCE)) {
+      return in.readAllBytes();
+    }
+  }
+
+  static HmmModel withProvenance(HmmModel m, Map<String, String> provenance) {
+    return new HmmModel(m.order(), m.tags(), m.logBigramTable(), m.logTrigramTable(), m.lexicon(), m.unknownWords(), provenance);
+  }
+
+  static void assertSameModel(HmmModel expected, HmmModel actual) {
+    assertEquals(expected.order(), actual.order());
+    assertEquals(expected.tags(), actual.tags());
+    assertArrayEquals(expected.logBigramTable(), actual.logBigramTable());
+    assertArrayEquals(expected.logTrigramTable(), actual.logTrigramTable());
+    assertEquals(new HashMap<>(expected.provenance()), new HashMap<>(actual.provenance()));
+    assertSameLexicon(expected.lexicon(), actual.lexicon());
+    assertSameUnknownWords(expected.unknownWords(), actual.unknownWords());
+  }
+
+  private static void assertSameLexicon(Lexicon expected, Lexicon actual) {
+    assertEquals(expected.size(), actual.size());
+    List<Lexicon.Entry> expectedEntries = expected.entries();
+    List<Lexicon.Entry> actualEntries = actual.entries();
+    for (int w = 0; w < expected.size(); w++) {
+      Lexicon.Entry e = expectedEntries.get(w);
+      Lexicon.Entry a = actualEntries.get(w);
+      assertEquals(e.word(), a.word());
+      assertArrayEquals(e.tags(), a.tags(), e.word());
+      assertArrayEquals(e.logEmissions(), a.logEmissions(), e.word());
+      assertEquals(w, actual.lookup(e.word()), e.word());
+    }
+  }
+
+  private static void assertSameUnknownWords(UnknownWordModel expected, UnknownWordModel actual) {
+    assertEquals(expected.theta(), actual.theta());
+    assertEquals(expected.maxSuffixLength(), actual.maxSuffixLength());
+    assertArrayEquals(expected.openTags(), actual.openTags());
+    assertArrayEquals(expected.logPrior(), actual.logPrior());
+    assertArrayEquals(expected.baseDistribution(), actual.baseDistribution());
+    assertArrayEquals(expected.trieOfShape(), actual.trieOfShape());
+    assertEquals(expected.tries().length, actual.tries().length);
+    for (int i = 0; i < expected.tries().length; i++) {
+      assertSameTrie(expected.tries()[i], actual.tries()[i]);
+    }
+    for (String word : PROBES) {
+      assertArrayEquals(scores(expected, word), scores(actual, word), "unknown-word scores of '" + word + "'");
+    }
+  }
+
+  private static void assertSameTrie(SuffixTrie expected, SuffixTrie actual) {
+    assertArrayEquals(expected.childStart, actual.childStart);
+    assertArrayEquals(expected.childChar, actual.childChar);
+    assertArrayEquals(expected.countStart, actual.countStart);
+    assertArrayEquals(expected.countTag, actual.countTag);
+    assertArrayEquals(expected.countValue, actual.countValue);
+  }
+
+  private static double[] scores(UnknownWordModel model, String word) {
+    int k = model.openTagCount();
+    double[] out = new double[k + 1];
+    out[k] = model.logEmissions(word.toCharArray(), 0, word.length(), new double[k], out);
+    return out;
+  }
+}

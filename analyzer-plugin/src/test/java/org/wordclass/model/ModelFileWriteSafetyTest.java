@@ -1,0 +1,102 @@
+package org.wordclass.model;
+
+import static org.junit.jupiter.api.Assertions.assertArrayEquals;
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertThrows;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+import static org.junit.jupiter.api.Assumptions.assumeFalse;
+
+import java.io.IOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.nio.file.attribute.PosixFilePermissions;
+import java.util.HashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.stream.Stream;
+import org.junit.jupiter.api.BeforeEach;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+import org.wordclass.testing.TestModels;
+
+/**
+ * A model file is never left half-written (common practice: write a temporary file, then rename
+ * it over the target): a failed write leaves no temporary file and the previous file as it was.
+ */
+class ModelFileWriteSafetyTest {
+  @TempDir Path dir;
+  private Path target;
+  private byte[] previous;
+
+  @BeforeEach
+  void writePreviousModel() throws IOException {
+    target = dir.resolve("model.wcm");
+    ModelFile.write(TestModels.small(), target);
+    previous = Files.readAllBytes(target);
+  }
+
+  /** A model whose writing fails half-way: a provenance value that cannot be written. */
+  private static HmmModel modelWhoseWriteFails() {
+    Map<String, String> provenance = new HashMap<>(TestModels.small().provenance());
+    provenance.put("zz-last", null);
+    return ModelFileRoundTripTest.withProvenance(TestModels.small(), provenance);
+  }
+
+  @Test
+  void failedWriteKeepsThePreviousFileAndLeavesNoTemporaryFile() throws IOException {
+    assertThrows(NullPointerException.class, () -> ModelFile.write(modelWhoseWriteFails(), target));
+    assertEquals(List.of("model.wcm"), fileNames(dir));
+    assertArrayEquals(previous, Files.readAllBytes(target));
+  }
+
+  @Test
+  void failedWriteOfANewFileLeavesNothing() throws IOException {
+    assertThrows(NullPointerException.class, () -> ModelFile.write(modelWhoseWriteFails(), dir.resolve("new.wcm")));
+    assertEquals(List.of("model.wcm"), fileNames(dir));
+  }
+
+  /** The target is a directory holding a file: the move fails, after the whole model was written. */
+  @Test
+  void targetThatIsADirectoryIsLeftAloneAndNoTemporaryFileRemains() throws IOException {
+    Path folder = Files.createDirectory(dir.resolve("folder.wcm"));
+    Files.write(folder.resolve("keep.txt"), new byte[] {1, 2, 3});
+    assertThrows(IOException.class, () -> ModelFile.write(TestModels.small(), folder));
+    assertEquals(List.of("folder.wcm", "model.wcm"), fileNames(dir));
+    assertEquals(List.of("keep.txt"), fileNames(folder));
+  }
+
+  @Test
+  void successfulWriteReplacesThePreviousFileAndLeavesNoTemporaryFile() throws IOException {
+    HmmModel other = TestModels.random(new java.util.Random(3L), 1);
+    ModelFile.write(other, target);
+    assertEquals(List.of("model.wcm"), fileNames(dir));
+    assertArrayEquals(TestModels.bytes(other), Files.readAllBytes(target));
+  }
+
+  /** Needs a user whom file permissions bind; root writes into read-only folders regardless. */
+  @Test
+  void readOnlyDirectoryIsRefusedAndThePreviousFileKept() throws IOException {
+    assumeFalse("root".equals(System.getProperty("user.name")), "skipped: permissions do not bind root");
+    Files.setPosixFilePermissions(dir, PosixFilePermissions.fromString("r-xr-xr-x"));
+    try {
+      assertThrows(IOException.class, () -> ModelFile.write(TestModels.random(new java.util.Random(4L), 1), target));
+    } finally {
+      Files.setPosixFilePermissions(dir, PosixFilePermissions.fromString("rwxr-xr-x"));
+    }
+    assertEquals(List.of("model.wcm"), fileNames(dir));
+    assertArrayEquals(previous, Files.readAllBytes(target));
+  }
+
+  @Test
+  void previousFileIsStillAValidModel() throws IOException {
+    assertThrows(NullPointerException.class, () -> ModelFile.write(modelWhoseWriteFails(), target));
+    ModelFileRoundTripTest.assertSameModel(TestModels.small(), ModelFile.read(target));
+    assertTrue(Files.isRegularFile(target));
+  }
+
+  private static List<String> fileNames(Path folder) throws IOException {
+    try (Stream<Path> files = Files.list(folder)) {
+      return files.map(p -> p.getFileName().toString()).sorted().toList();
+    }
+  }
+}

@@ -1,0 +1,65 @@
+package org.wordclass.cli;
+
+import java.io.IOException;
+import java.nio.file.Path;
+import org.wordclass.corpus.Corpus;
+import org.wordclass.corpus.TagColumn;
+import org.wordclass.evaluation.Evaluation;
+import org.wordclass.evaluation.EvaluationReport;
+import org.wordclass.model.HmmModel;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
+import picocli.CommandLine.Option;
+
+/** {@code wordclass evaluate}: tags gold corpus files with a model and scores the result. */
+@Command(name = "evaluate", mixinStandardHelpOptions = true,
+    description = "Tags gold-tagged corpus files with a model and reports accuracy (overall, on known and on "
+        + "unknown words), per-tag scores and confusions; optionally as JSON, HTML and PNG files.")
+final class EvaluateCommand extends BaseCommand {
+  @Mixin
+  ModelOption model;
+
+  @Mixin
+  CorpusOptions corpus;
+
+  @Option(names = "--report", paramLabel = "FILE", description = "Also write the figures as JSON.")
+  Path json;
+
+  @Option(names = "--html", paramLabel = "FILE",
+      description = "Also write a self-contained HTML page with the figures and a heat map of the confusions.")
+  Path html;
+
+  @Option(names = "--png", paramLabel = "FILE", description = "Also draw the confusion heat map as a PNG image.")
+  Path png;
+
+  @Override
+  public Integer call() throws Exception {
+    HmmModel loaded = model.load();
+    Corpus input = corpus.open(Provenance.tagColumn(loaded, TagColumn.UPOS));
+    Progress progress = Progress.start("evaluate", input, 1, err());
+    Evaluation evaluation = new Evaluation(loaded);
+    progress.read(input, evaluation::add);
+    progress.finish();
+    EvaluationReport report = evaluation.report();
+    out().print(report.toText());
+    out().flush();
+    writeFiles(report, "Evaluation of " + model.name() + " on " + fileNames(input));
+    return OK;
+  }
+
+  private void writeFiles(EvaluationReport report, String title) throws IOException {
+    if (json != null) {
+      Json.write(json, report);
+    }
+    if (html != null) {
+      HtmlReport.write(html, report, title);
+    }
+    if (png != null) {
+      HeatmapImage.write(png, ConfusionHeatmap.of(report.confusionMatrix()), title);
+    }
+  }
+
+  private static String fileNames(Corpus input) {
+    return String.join(", ", input.files().stream().map(p -> p.getFileName().toString()).toList());
+  }
+}

@@ -1,0 +1,154 @@
+package org.wordclass.cli;
+
+import java.nio.ByteBuffer;
+import java.security.MessageDigest;
+import java.util.ArrayList;
+import java.util.Comparator;
+import java.util.HexFormat;
+import java.util.IdentityHashMap;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+import java.util.SortedMap;
+import org.apache.lucene.codecs.CodecUtil;
+import org.apache.lucene.store.ByteBuffersDataInput;
+import org.apache.lucene.store.ByteBuffersIndexInput;
+import org.apache.lucene.store.IndexInput;
+import org.wordclass.model.HmmModel;
+import org.wordclass.model.ModelFile;
+import org.wordclass.model.SuffixTrie;
+import org.wordclass.model.TagSet;
+import org.wordclass.model.WordShape;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
+import picocli.CommandLine.Option;
+
+/** {@code wordclass inspect}: what a model file holds, how big it is and where it came from. */
+@Command(name = "inspect", mixinStandardHelpOptions = true,
+    description = "Describes a model: tag set, order, lexicon and unknown-word model sizes, file size and "
+        + "checksums, heap size, provenance and the most probable tag transitions.")
+final class InspectCommand extends BaseCommand {
+  static final int TOP_TRANSITIONS = 15;
+  static final String SENTENCE_START = "<s>";
+  static final String SENTENCE_END = "</s>";
+
+  @Mixin
+  ModelOption model;
+
+  @Option(names = "--json", description = "Print the description as JSON instead of text.")
+  boolean json;
+
+  /** A tag-to-tag transition and its probability under the first-order chain. */
+  record Transition(String from, String to, double probability) {}
+
+  /** Everything inspect reports, in the shape of its JSON output. */
+  record ModelDescription(
+      String model,
+      long fileBytes,
+      String crc32,
+      String sha256,
+      long heapBytes,
+      int order,
+      List<String> tags,
+      int vocabulary,
+      int wordTagPairs,
+      List<String> openTags,
+      Map<String, Integer> suffixTrieNodes,
+      SortedMap<String, String> provenance,
+      List<Transition> strongestTransitions) {}
+
+  @Override
+  public Integer call() throws Exception {
+    byte[] bytes = model.readBytes();
+    HmmModel loaded = ModelFile.read(bytes, model.name());
+    ModelDescription d = describe(loaded, bytes);
+    out().print(json ? Json.toString(d) : toText(d));
+    out().flush();
+    return OK;
+  }
+
+  ModelDescription describe(HmmModel m, byte[] bytes) throws Exception {
+    List<String> open = new ArrayList<>();
+    for (int k = 0; k < m.unknownWords().openTagCount(); k++) {
+      open.add(m.tags().name(m.unknownWords().openTag(k)));
+    }
+    return new ModelDescription(model.name(), bytes.length, crc32(bytes), sha256(bytes), m.ramBytesUsed(),
+        m.order(), m.tags().names(), m.lexicon().size(), m.lexicon().pairCount(), open, trieSizes(m),
+        m.provenance(), strongestTransitions(m));
+  }
+
+  /** The checksum stored in the file's footer, as the Lucene codec utilities read it. */
+  private static String crc32(byte[] bytes) throws Exception {
+    try (IndexInput in = new ByteBuffersIndexInput(
+        new ByteBuffersDataInput(List.of(ByteBuffer.wrap(bytes))), "model")) {
+      return String.format(Locale.ROOT, "%08x", CodecUtil.retrieveChecksum(in));
+    }
+  }
+
+  private static String sha256(byte[] bytes) throws Exception {
+    return HexFormat.of().formatHex(MessageDigest.getInstance("SHA-256").digest(bytes));
+  }
+
+  /** Nodes of each suffix trie, keyed by the word shapes that share it ({@code LOWER+ALL_CAPS}). */
+  private static Map<String, Integer> trieSizes(HmmModel m) {
+    Map<SuffixTrie, String> shapesOfTrie = new IdentityHashMap<>();
+    Map<String, Integer> sizes = new LinkedHashMap<>();
+    List<SuffixTrie> order = new ArrayList<>();
+    for (WordShape shape : WordShape.values()) {
+      SuffixTrie trie = m.unknownWords().suffixTrie(shape);
+      if (shapesOfTrie.merge(trie, shape.name(), (a, b) -> a + "+" + b).equals(shape.name())) {
+        order.add(trie);
+      }
+    }
+    for (SuffixTrie trie : order) {
+      sizes.put(shapesOfTrie.get(trie), trie.nodeCount());
+    }
+    return sizes;
+  }
+
+  /** The most probable transitions of the first-order chain, the boundary named as start or end. */
+  static List<Transition> strongestTransitions(HmmModel m) {
+    TagSet tags = m.tags();
+    int boundary = m.boundary();
+    List<Transition> all = new ArrayList<>();
+    for (int from = 0; from <= boundary; from++) {
+      for (int to = 0; to <= boundary; to++) {
+        if (from == boundary && to == boundary) {
+          continue; // an empty sentence says nothing about the tags
+        }
+        all.add(new Transition(from == boundary ? SENTENCE_START : tags.name(from),
+            to == boundary ? SENTENCE_END : tags.name(to), Math.exp(m.logBigram(from, to))));
+      }
+    }
+    all.sort(Comparator.comparingDouble(Transition::probability).reversed()
+        .thenComparing(Transition::from).thenComparing(Transition::to));
+    return List.copyOf(all.subList(0, Math.min(TOP_TRANSITIONS, all.size())));
+  }
+
+  static String toText(ModelDescription d) {
+    StringBuilder s = new StringBuilder();
+    line(s, "model", d.model());
+    line(s, "file size", d.fileBytes() + " bytes");
+    line(s, "checksum", "CRC-32 " + d.crc32());
+    line(s, "SHA-256", d.sha256());
+    line(s, "heap size", String.format(Locale.ROOT, "about %s", Progress.megabytes(d.heapBytes())));
+    line(s, "order", d.order() + (d.order() == 2 ? " (tag trigrams)" : " (tag bigrams)"));
+    line(s, "tags", d.tags().size() + ": " + String.join(" ", d.tags()));
+    line(s, "vocabulary", d.vocabulary() + " words, " + d.wordTagPairs() + " word/tag pairs");
+    line(s, "open tags", d.openTags().size() + ": " + String.join(" ", d.openTags()));
+    s.append("suffix tries (nodes)\n");
+    d.suffixTrieNodes().forEach((shapes, nodes) -> s.append(String.format(Locale.ROOT, "  %-40s %d%n", shapes, nodes)));
+    s.append("provenance\n");
+    d.provenance().forEach((key, value) -> s.append(String.format(Locale.ROOT, "  %-30s %s%n", key, value)));
+    s.append("strongest transitions P(next | previous)\n");
+    for (Transition t : d.strongestTransitions()) {
+      s.append(String.format(Locale.ROOT, "  %-6s -> %-6s %.4f%n", t.from(), t.to(), t.probability()));
+    }
+    return s.toString();
+  }
+
+  private static void line(StringBuilder s, String name, String value) {
+    s.append(String.format(Locale.ROOT, "%-20s %s%n", name, value));
+  }
+}

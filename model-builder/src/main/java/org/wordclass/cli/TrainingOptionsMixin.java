@@ -1,0 +1,104 @@
+package org.wordclass.cli;
+
+import java.lang.reflect.Field;
+import java.util.Locale;
+import org.wordclass.training.TrainingOptions;
+import picocli.CommandLine.IDefaultValueProvider;
+import picocli.CommandLine.Model.ArgSpec;
+import picocli.CommandLine.Model.CommandSpec;
+import picocli.CommandLine.Model.OptionSpec;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.ParameterException;
+import picocli.CommandLine.Spec;
+
+/**
+ * One option per {@link TrainingOptions} field (a mixin). The defaults are those of {@link
+ * TrainingOptions#DEFAULTS}, supplied at run time by {@link Defaults} so that help and behaviour
+ * follow any change made there.
+ */
+final class TrainingOptionsMixin {
+  @Spec(Spec.Target.MIXEE)
+  CommandSpec mixee;
+
+  @Option(names = "--order", paramLabel = "1|2",
+      description = "1 for a first-order (bigram) model, 2 for a second-order (trigram) one. Default: ${DEFAULT-VALUE}.")
+  int order;
+
+  @Option(names = "--max-suffix-length", paramLabel = "N",
+      description = "Longest word ending the unknown-word model counts. Default: ${DEFAULT-VALUE}.")
+  int maxSuffixLength;
+
+  @Option(names = "--rare-word-max-count", paramLabel = "N",
+      description = "Words seen at most this often teach the unknown-word model. Default: ${DEFAULT-VALUE}.")
+  int rareWordMaxCount;
+
+  @Option(names = "--suffix-weight", paramLabel = "W|held-out|tag-spread",
+      description = "Weight of shorter endings when longer ones are combined with them: a positive number; "
+          + "held-out to choose it by scoring each rare training word as if unseen; tag-spread for the "
+          + "standard deviation of the tag probabilities. Default: ${DEFAULT-VALUE}.")
+  String suffixWeight;
+
+  @Option(names = "--open-class-min-share", paramLabel = "SHARE",
+      description = "A tag may be given to unknown words when at least this share (0 to 1) of the words "
+          + "seen once carry it. Default: ${DEFAULT-VALUE}.")
+  double openClassMinShare;
+
+  // the fallback value makes --shape-classes mean true and --no-shape-classes false whatever the default
+  @Option(names = "--shape-classes", negatable = true, fallbackValue = "true",
+      description = "Keep separate ending counts per spelling shape (lower case, capitalised, all capitals, "
+          + "with digits, no letters); --no-shape-classes tells only capitalised from other words. "
+          + "Default: ${DEFAULT-VALUE}.")
+  boolean shapeClasses;
+
+  /** The options given; a value the estimator refuses is reported as a usage error. */
+  TrainingOptions toOptions() {
+    try {
+      TrainingOptions options = new TrainingOptions(order, maxSuffixLength, rareWordMaxCount,
+          TrainingOptions.SuffixWeightRule.HELD_OUT, Double.NaN, openClassMinShare, shapeClasses);
+      return withSuffixWeight(options, suffixWeight);
+    } catch (IllegalArgumentException e) {
+      throw new ParameterException(mixee.commandLine(), "Invalid training option: " + e.getMessage());
+    }
+  }
+
+  /** Reads a rule name or a number. */
+  private TrainingOptions withSuffixWeight(TrainingOptions options, String value) {
+    for (TrainingOptions.SuffixWeightRule rule : TrainingOptions.SuffixWeightRule.values()) {
+      if (rule != TrainingOptions.SuffixWeightRule.FIXED && value.equalsIgnoreCase(rule.name().replace('_', '-'))) {
+        return options.withSuffixWeightRule(rule);
+      }
+    }
+    try {
+      return options.withSuffixWeight(Double.parseDouble(value));
+    } catch (NumberFormatException e) {
+      throw new ParameterException(mixee.commandLine(),
+          "Invalid value for --suffix-weight: '" + value + "' is neither a number nor held-out or tag-spread");
+    }
+  }
+
+  /**
+   * Defaults of the options above, taken from {@link TrainingOptions#describe()} of the defaults:
+   * {@code --max-suffix-length} reads {@code option.maxSuffixLength}, and so on.
+   */
+  static final class Defaults implements IDefaultValueProvider {
+    @Override
+    public String defaultValue(ArgSpec arg) {
+      if (!(arg instanceof OptionSpec option)
+          || !(arg.userObject() instanceof Field field)
+          || field.getDeclaringClass() != TrainingOptionsMixin.class) {
+        return null;
+      }
+      return TrainingOptions.DEFAULTS.describe().get("option." + camelCase(option.longestName()));
+    }
+
+    /** {@code --max-suffix-length} to {@code maxSuffixLength}. */
+    static String camelCase(String optionName) {
+      String[] parts = optionName.replaceFirst("^-+", "").split("-");
+      StringBuilder s = new StringBuilder(parts[0]);
+      for (int i = 1; i < parts.length; i++) {
+        s.append(parts[i].substring(0, 1).toUpperCase(Locale.ROOT)).append(parts[i].substring(1));
+      }
+      return s.toString();
+    }
+  }
+}
