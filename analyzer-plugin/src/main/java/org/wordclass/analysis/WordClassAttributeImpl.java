@@ -43,6 +43,11 @@ public class WordClassAttributeImpl extends AttributeImpl implements WordClassAt
   }
 
   @Override
+  public WordClassAttributeImpl clone() {
+    return (WordClassAttributeImpl) super.clone();
+  }
+
+  @Override
   public void reflectWith(AttributeReflector reflector) {
     reflector.reflect(WordClassAttribute.class, "wordClass", name);
     reflector.reflect(WordClassAttribute.class, "wordClassIndex", index);
