@@ -64,12 +64,14 @@ import org.wordclass.model.TagSet;
  * <h2>Cost</h2>
  *
  * Viterbi costs O(K<sup>2</sup>) per token at order 1 and O(K<sup>3</sup>) at order 2, for K
- * candidate classes (one or two for most known words, all open classes for unknown words): about
- * a microsecond per token at order 2 with the bundled English model. Confidence adds a
- * forward-backward pass, about twice the Viterbi cost again. Memory is bounded by the window: one
- * pooled copy of the token's attributes per buffered token, reused for the life of the filter,
- * plus the decoder's buffers; steady-state filtering allocates nothing per token unless upstream
- * payloads must be copied.
+ * candidate classes (one or two for most known words, all open classes for unknown words). With
+ * the bundled English model on ordinary prose that is roughly 0.4 microseconds per token at order
+ * 1 and 0.6 at order 2; confidence (a forward-backward pass) about triples it. Memory is bounded
+ * by the window: one pooled copy of the token's attributes per buffered token, kept for the life
+ * of the filter, plus the decoder's buffers, a few kilobytes per token of the window at most.
+ * Steady-state filtering allocates nothing per token, unless upstream payloads must be copied.
+ * The window bound itself costs little: on running text cut every 512 tokens, fewer than 2 tags
+ * in 10,000 differ from an uncut decoding.
  */
 public final class WordClassFilter extends TokenFilter {
   private final CharTermAttribute termAtt = addAttribute(CharTermAttribute.class);

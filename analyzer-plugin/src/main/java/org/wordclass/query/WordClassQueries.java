@@ -28,10 +28,10 @@ import org.wordclass.model.TagSet;
  * them lowercased, and lowercase the class names of qualified terms too ({@code book_verb}).
  *
  * <p>A class-restricted query only finds the occurrences the tagger classed as asked, so it loses
- * recall wherever the tagger is wrong (a few tokens in a hundred on text like its training text,
- * more on other text, headlines, lists and queries). Use it to rank or to narrow, and keep an
- * unrestricted query at hand when recall matters; class weighting degrades more gently, since a
- * wrongly classed occurrence still matches with another weight.
+ * recall wherever the tagger is wrong: on every token it misclasses, which happens more often on
+ * text unlike its training text (headlines, lists, product names). Use it to rank or to narrow,
+ * and keep an unrestricted query at hand when recall matters. Class weighting degrades more
+ * gently: a misclassed occurrence still matches, only with another weight.
  */
 public final class WordClassQueries {
   private WordClassQueries() {}
@@ -47,10 +47,11 @@ public final class WordClassQueries {
       throw new IllegalArgumentException("payloads say the class only with the TAG or INDEX encoding, not " + encoding);
     }
     requireClasses(classes);
-    ClassWeights unused = ClassWeights.uniform(tags);
+    // TAG and INDEX payloads do not depend on weights
+    ClassWeights noWeights = ClassWeights.uniform(tags);
     SpanQuery[] alternatives = new SpanQuery[classes.length];
     for (int i = 0; i < classes.length; i++) {
-      BytesRef payload = encoding.encode(tags, WordClasses.require(tags, classes[i], "classes"), unused);
+      BytesRef payload = encoding.encode(tags, WordClasses.require(tags, classes[i], "classes"), noWeights);
       alternatives[i] = new SpanPayloadCheckQuery(new SpanTermQuery(new Term(field, word)), List.of(payload));
     }
     return alternatives.length == 1 ? alternatives[0] : new SpanOrQuery(alternatives);
