@@ -89,7 +89,7 @@ public final class WordClassFilter extends TokenFilter {
   private final BytesRef[] payloads;
   private final BytesRefBuilder payload = new BytesRefBuilder();
 
-  /** Copies of buffered tokens; {@code slots[windowSize]} holds a carried-over token. */
+  /** Copies of buffered tokens; while {@link #carried}, {@code slots[windowSize]} holds the next window's first. */
   private AttributeSource[] slots = new AttributeSource[0];
   private CharTermAttribute[] slotTerms = new CharTermAttribute[0];
   private int pooledAttributeCount;
@@ -204,7 +204,8 @@ public final class WordClassFilter extends TokenFilter {
   /** Copies the current token into pooled slot {@code i}, creating the slot on first use. */
   private void save(int i) {
     if (i >= slots.length) {
-      int grown = Math.min(Math.max(i + 1, slots.length * 2), options.maxWindow() + 1);
+      // a window never holds more than maxWindow tokens, the carried one included
+      int grown = Math.min(Math.max(i + 1, slots.length * 2), options.maxWindow());
       slots = Arrays.copyOf(slots, grown);
       slotTerms = Arrays.copyOf(slotTerms, grown);
     }

@@ -213,7 +213,7 @@ public class TestWordClassFilter extends BaseTokenStreamTestCase {
     String text = "Our club cooks a big stew every Friday and everyone brings bread and the stew needs a slow cook";
     List<String> tokens = words(text);
     Tagger tagger = new Tagger(DefaultModel.get());
-    for (int window : new int[] {1, 2, 3, 5, 7, tokens.size() - 1, tokens.size(), 512}) {
+    for (int window : new int[] {1, 2, 3, 5, 7, tokens.size() - 1, tokens.size(), 512, Integer.MAX_VALUE}) {
       List<String> expected = new ArrayList<>();
       for (int from = 0; from < tokens.size(); from += window) {
         expected.addAll(Arrays.asList(tagger.tagNames(tokens.subList(from, Math.min(tokens.size(), from + window)))));
