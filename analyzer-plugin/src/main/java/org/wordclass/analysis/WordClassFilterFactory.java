@@ -1,0 +1,232 @@
+package org.wordclass.analysis;
+
+import java.io.IOException;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+import java.util.Set;
+import org.apache.lucene.analysis.TokenFilterFactory;
+import org.apache.lucene.analysis.TokenStream;
+import org.apache.lucene.util.ResourceLoader;
+import org.apache.lucene.util.ResourceLoaderAware;
+import org.wordclass.model.DefaultModel;
+import org.wordclass.model.HmmModel;
+import org.wordclass.model.ModelFormatException;
+
+/**
+ * Factory for {@link WordClassFilter}, followed by a {@link WordClassSelectFilter} when classes
+ * are kept or dropped. SPI name {@value #NAME}:
+ *
+ * <pre class="prettyprint">
+ * &lt;fieldType name="text_classed" class="solr.TextField" positionIncrementGap="100"&gt;
+ *   &lt;analyzer&gt;
+ *     &lt;tokenizer name="standard"/&gt;
+ *     &lt;filter name="wordClass" payload="weight" weights="NOUN:2.0,PROPN:2.0,VERB:1.5"/&gt;
+ *     &lt;filter name="lowercase"/&gt;
+ *   &lt;/analyzer&gt;
+ * &lt;/fieldType&gt;</pre>
+ *
+ * Arguments, all optional:
+ *
+ * <ul>
+ *   <li>{@code model}: resource name of a model file, read through the resource loader (so a
+ *       path in the configuration directory works); default the bundled English UPOS model.
+ *       Loaded models are shared through {@link ModelCache}.
+ *   <li>{@code order}: {@code 1} or {@code 2}, the order of the transitions to decode with;
+ *       default the order the model was trained for. Order 1 is faster, order 2 more accurate.
+ *   <li>{@code confidence}: {@code true} to compute each token's posterior probability into
+ *       {@link WordClassAttribute#getConfidence()} (a forward-backward pass: about three times the
+ *       decoding cost); default {@code false}.
+ *   <li>{@code payload}: {@code none}, {@code tag}, {@code index} or {@code weight}; see {@link
+ *       PayloadEncoding}. Default {@code none}.
+ *   <li>{@code weights}: class weights for {@code payload="weight"}, as {@code CLASS:weight}
+ *       items separated by commas, e.g. {@code NOUN:2.0,PROPN:2.0,VERB:1.5}.
+ *   <li>{@code defaultWeight}: weight of the classes {@code weights} does not list; default 1.0.
+ *   <li>{@code keepClasses}: comma-separated classes; only their tokens are kept.
+ *   <li>{@code dropClasses}: comma-separated classes whose tokens are removed; not together with
+ *       {@code keepClasses}. Removed tokens leave position gaps.
+ *   <li>{@code qualifiedTerms}: {@code true} to add, at each position, the word joined to its
+ *       class ({@code book_VERB}); default {@code false}.
+ *   <li>{@code separator}: what joins word and class in qualified terms; default {@code _}.
+ *   <li>{@code maxWindow}: the most tokens decoded together (a longer sentence is cut, see
+ *       {@link WordClassFilter}); default {@value WordClassOptions#DEFAULT_MAX_WINDOW}.
+ * </ul>
+ *
+ * Malformed or unknown arguments fail when the factory is constructed, naming the argument.
+ * Class names are checked against the model's tag set when the model is loaded, in {@link
+ * #inform}, and fail naming the argument, the class and the model's classes.
+ */
+public class WordClassFilterFactory extends TokenFilterFactory implements ResourceLoaderAware {
+  /** SPI name. */
+  public static final String NAME = "wordClass";
+
+  private static final List<String> BOOLEANS = List.of("true", "false");
+  /** Value of {@link #order} when the argument is absent: decode at the order of the model. */
+  private static final int MODEL_ORDER = 0;
+
+  private final String modelName;
+  private final int order;
+  private final boolean confidence;
+  private final PayloadEncoding payload;
+  private final Map<String, Float> weights;
+  private final float defaultWeight;
+  private final Set<String> selectedClasses;
+  private final boolean keep;
+  private final boolean qualifiedTerms;
+  private final String separator;
+  private final int maxWindow;
+
+  private volatile WordClassOptions options;
+
+  /** Creates the factory from its arguments, consuming them from {@code args}. */
+  public WordClassFilterFactory(Map<String, String> args) {
+    super(args);
+    modelName = get(args, "model");
+    String orderArg = get(args, "order", List.of("1", "2"));
+    order = orderArg == null ? MODEL_ORDER : Integer.parseInt(orderArg);
+    confidence = booleanArg(args, "confidence");
+    payload = PayloadEncoding.valueOf(
+        get(args, "payload", List.of("none", "tag", "index", "weight"), "none", false).toUpperCase(Locale.ROOT));
+    boolean weighted = args.containsKey("weights") || args.containsKey("defaultWeight");
+    if (weighted && payload != PayloadEncoding.WEIGHT) {
+      throw new IllegalArgumentException("'weights' and 'defaultWeight' only apply with payload=\"weight\"");
+    }
+    weights = parseWeights(get(args, "weights", ""));
+    defaultWeight = floatArg(args, "defaultWeight", ClassWeights.DEFAULT_WEIGHT);
+    Set<String> keepClasses = classList(args, "keepClasses");
+    Set<String> dropClasses = classList(args, "dropClasses");
+    if (keepClasses != null && dropClasses != null) {
+      throw new IllegalArgumentException("'keepClasses' and 'dropClasses' cannot both be given");
+    }
+    keep = keepClasses != null;
+    selectedClasses = keep ? keepClasses : dropClasses;
+    qualifiedTerms = booleanArg(args, "qualifiedTerms");
+    separator = get(args, "separator", WordClassOptions.DEFAULT_SEPARATOR);
+    if (separator.isEmpty()) {
+      throw new IllegalArgumentException("'separator' must not be empty");
+    }
+    maxWindow = positiveIntArg(args, "maxWindow", WordClassOptions.DEFAULT_MAX_WINDOW);
+    if (!args.isEmpty()) {
+      throw new IllegalArgumentException("Unknown parameters: " + args);
+    }
+  }
+
+  /** Default ctor for compatibility with SPI. */
+  public WordClassFilterFactory() {
+    throw defaultCtorException();
+  }
+
+  private boolean booleanArg(Map<String, String> args, String name) {
+    return Boolean.parseBoolean(get(args, name, BOOLEANS, "false", false));
+  }
+
+  private static float floatArg(Map<String, String> args, String name, float defaultValue) {
+    String value = args.remove(name);
+    try {
+      float parsed = value == null ? defaultValue : Float.parseFloat(value);
+      if (Float.isFinite(parsed)) {
+        return parsed;
+      }
+    } catch (NumberFormatException e) {
+      // reported below, naming the argument
+    }
+    throw new IllegalArgumentException("'" + name + "' must be a finite number, not '" + value + "'");
+  }
+
+  private static int positiveIntArg(Map<String, String> args, String name, int defaultValue) {
+    String value = args.remove(name);
+    try {
+      int parsed = value == null ? defaultValue : Integer.parseInt(value.trim());
+      if (parsed > 0) {
+        return parsed;
+      }
+    } catch (NumberFormatException e) {
+      // reported below, naming the argument
+    }
+    throw new IllegalArgumentException("'" + name + "' must be a positive integer, not '" + value + "'");
+  }
+
+  private Set<String> classList(Map<String, String> args, String name) {
+    boolean given = args.containsKey(name);
+    Set<String> classes = getSet(args, name);
+    if (given && classes == null) {
+      throw new IllegalArgumentException("'" + name + "' lists no classes");
+    }
+    return classes;
+  }
+
+  /** Parses {@code CLASS:weight} items separated by commas or spaces. */
+  static Map<String, Float> parseWeights(String spec) {
+    Map<String, Float> parsed = new LinkedHashMap<>();
+    for (String item : spec.split("[,\\s]+")) {
+      if (item.isEmpty()) {
+        continue;
+      }
+      int colon = item.lastIndexOf(':');
+      Float weight = colon > 0 ? parseWeight(item.substring(colon + 1)) : null;
+      if (weight == null) {
+        throw new IllegalArgumentException("'weights' expects CLASS:weight items separated by commas, such as NOUN:2.0, not '" + item + "'");
+      }
+      if (parsed.put(item.substring(0, colon), weight) != null) {
+        throw new IllegalArgumentException("'weights' gives the class " + item.substring(0, colon) + " twice");
+      }
+    }
+    return parsed;
+  }
+
+  private static Float parseWeight(String text) {
+    try {
+      float weight = Float.parseFloat(text);
+      return Float.isFinite(weight) ? weight : null;
+    } catch (NumberFormatException e) {
+      return null;
+    }
+  }
+
+  /** Loads the model and checks every class name against its tag set. */
+  @Override
+  public void inform(ResourceLoader loader) throws IOException {
+    HmmModel model = modelName == null ? DefaultModel.get() : load(loader, modelName);
+    if (selectedClasses != null) {
+      WordClasses.mask(model.tags(), selectedClasses, keep ? "keepClasses" : "dropClasses");
+    }
+    options = WordClassOptions.of(model)
+        .withOrder(order == MODEL_ORDER ? model.order() : order)
+        .withConfidence(confidence)
+        .withPayload(payload)
+        .withWeights(ClassWeights.of(model.tags(), weights, defaultWeight, "weights"))
+        .withQualifiedTerms(qualifiedTerms)
+        .withSeparator(separator)
+        .withMaxWindow(maxWindow);
+  }
+
+  private static HmmModel load(ResourceLoader loader, String name) throws IOException {
+    try {
+      return ModelCache.load(loader, name);
+    } catch (ModelFormatException e) {
+      throw e;
+    } catch (IOException e) {
+      throw new IOException("'model': cannot read the model resource " + name + ": " + e.getMessage(), e);
+    }
+  }
+
+  /** The settings and model of the filters made, once {@link #inform} has run. */
+  public WordClassOptions options() {
+    WordClassOptions current = options;
+    if (current == null) {
+      throw new IllegalStateException("the " + NAME + " filter factory was not informed with a resource loader");
+    }
+    return current;
+  }
+
+  @Override
+  public TokenStream create(TokenStream input) {
+    WordClassOptions current = options();
+    TokenStream tagged = new WordClassFilter(input, current);
+    if (selectedClasses == null) {
+      return tagged;
+    }
+    return new WordClassSelectFilter(tagged, current.model().tags(), selectedClasses, keep);
+  }
+}

@@ -1,0 +1,89 @@
+package org.wordclass.analysis;
+
+import java.util.Objects;
+import org.wordclass.model.HmmModel;
+
+/**
+ * What a {@link WordClassFilter} does, bound to the model it decodes with. Immutable and
+ * validated on construction, so one instance built from configuration serves every filter of
+ * every thread. Start from {@link #of(HmmModel)} and change settings with the {@code with}
+ * methods.
+ *
+ * @param model the model to decode with
+ * @param order 1 (bigram) or 2 (trigram) transitions; the model's own order by default
+ * @param confidence whether to compute each token's posterior probability; roughly triples the
+ *     decoding cost (a forward-backward pass besides Viterbi)
+ * @param payload how to write the class into the payload
+ * @param weights class weights for {@link PayloadEncoding#WEIGHT}
+ * @param qualifiedTerms whether to add {@code word + separator + CLASS} at each position
+ * @param separator joins word and class in qualified terms
+ * @param maxWindow most tokens buffered and decoded together; a longer sentence is cut
+ */
+public record WordClassOptions(
+    HmmModel model,
+    int order,
+    boolean confidence,
+    PayloadEncoding payload,
+    ClassWeights weights,
+    boolean qualifiedTerms,
+    String separator,
+    int maxWindow) {
+  /** Default of {@link #maxWindow}: long enough for nearly every real sentence. */
+  public static final int DEFAULT_MAX_WINDOW = 512;
+
+  /** Default of {@link #separator}. */
+  public static final String DEFAULT_SEPARATOR = "_";
+
+  public WordClassOptions {
+    Objects.requireNonNull(model, "model");
+    Objects.requireNonNull(payload, "payload");
+    Objects.requireNonNull(weights, "weights");
+    Objects.requireNonNull(separator, "separator");
+    if (order != 1 && order != 2) {
+      throw new IllegalArgumentException("order must be 1 or 2, not " + order);
+    }
+    if (maxWindow < 1) {
+      throw new IllegalArgumentException("maxWindow must be at least 1, not " + maxWindow);
+    }
+    if (separator.isEmpty()) {
+      throw new IllegalArgumentException("separator must not be empty");
+    }
+    if (!weights.tags().equals(model.tags())) {
+      throw new IllegalArgumentException("the weights are for another tag set than the model's");
+    }
+  }
+
+  /** Defaults: the model's order, no confidence, no payload, no qualified terms, windows of 512. */
+  public static WordClassOptions of(HmmModel model) {
+    return new WordClassOptions(
+        model, model.order(), false, PayloadEncoding.NONE, ClassWeights.uniform(model.tags()), false, DEFAULT_SEPARATOR, DEFAULT_MAX_WINDOW);
+  }
+
+  public WordClassOptions withOrder(int order) {
+    return new WordClassOptions(model, order, confidence, payload, weights, qualifiedTerms, separator, maxWindow);
+  }
+
+  public WordClassOptions withConfidence(boolean confidence) {
+    return new WordClassOptions(model, order, confidence, payload, weights, qualifiedTerms, separator, maxWindow);
+  }
+
+  public WordClassOptions withPayload(PayloadEncoding payload) {
+    return new WordClassOptions(model, order, confidence, payload, weights, qualifiedTerms, separator, maxWindow);
+  }
+
+  public WordClassOptions withWeights(ClassWeights weights) {
+    return new WordClassOptions(model, order, confidence, payload, weights, qualifiedTerms, separator, maxWindow);
+  }
+
+  public WordClassOptions withQualifiedTerms(boolean qualifiedTerms) {
+    return new WordClassOptions(model, order, confidence, payload, weights, qualifiedTerms, separator, maxWindow);
+  }
+
+  public WordClassOptions withSeparator(String separator) {
+    return new WordClassOptions(model, order, confidence, payload, weights, qualifiedTerms, separator, maxWindow);
+  }
+
+  public WordClassOptions withMaxWindow(int maxWindow) {
+    return new WordClassOptions(model, order, confidence, payload, weights, qualifiedTerms, separator, maxWindow);
+  }
+}
