@@ -183,7 +183,7 @@ public final class WordClassFilter extends TokenFilter {
     slots[i].copyTo(this);
     int tag = lattice.candidateTag(i, best[i]);
     String name = tags.name(tag);
-    double confidence = options.confidence() ? decoder.posterior(i, best[i]) : Double.NaN;
+    double confidence = options.confidence() ? decoder.tagPosterior(i, best[i]) : Double.NaN;
     typeAtt.setType(name);
     classAtt.setWordClass(name, tag, confidence);
     if (payloadAtt != null) {
