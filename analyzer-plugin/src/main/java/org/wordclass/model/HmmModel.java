@@ -88,8 +88,8 @@ public final class HmmModel {
     this.cues = cues;
     this.logBigram = toFloatPrecision(logBigram);
     this.logTrigram = toFloatPrecision(logTrigram);
-    this.bigram = exp(logBigram);
-    this.trigram = exp(logTrigram);
+    this.bigram = exp(this.logBigram);
+    this.trigram = exp(this.logTrigram);
     this.lexicon = lexicon;
     this.unknownWords = unknownWords;
     this.provenance = Collections.unmodifiableSortedMap(new TreeMap<>(provenance));

@@ -89,9 +89,10 @@ class BundledModelDecodingTest {
       for (int k = 0; k < tags.length; k++) {
         double[] terms = new double[previous.length];
         for (int j = 0; j < previous.length; j++) {
-          terms[j] = previous[j] + MODEL.logBigram(previousTags[j], tags[k]);
+          // a word's emission may depend on the previous state: one per (previous, current) pair
+          terms[j] = previous[j] + MODEL.logBigram(previousTags[j], tags[k]) + lattice.logEmission(i, j, k);
         }
-        here[k] = logSumExp(terms) + lattice.candidateLogEmission(i, k);
+        here[k] = logSumExp(terms);
       }
       previous = here;
       previousTags = tags;
@@ -121,7 +122,7 @@ class BundledModelDecodingTest {
       List<String> tokens = randomTokens(rnd, 1 + rnd.nextInt(30), 0.3);
       int[] tags = tagger.tag(tokens, false).tags();
       for (int i = 0; i < tags.length; i++) {
-        int word = MODEL.lexicon().lookup(tokens.get(i));
+        int word = lookupAsTheLatticeDoes(tokens.get(i), i);
         Set<Integer> allowed = word >= 0 ? lexiconTags(word) : open;
         assertTrue(allowed.contains(tags[i]), "tag " + tags[i] + " for '" + tokens.get(i) + "' in " + tokens);
       }
@@ -179,20 +180,32 @@ class BundledModelDecodingTest {
     }
   }
 
+  /** Candidate states of position i; the boundary state outside the sequence. */
   /** Candidate tags at a position, the boundary before the first and after the last token. */
   private static int[] tagsAt(Lattice lattice, int i) {
     if (i < 0 || i >= lattice.size()) {
       return new int[] {MODEL.boundary()};
     }
-    return IntStream.range(0, lattice.candidateCount(i)).map(k -> lattice.candidateTag(i, k)).toArray();
+    return IntStream.range(0, lattice.candidateCount(i)).map(k -> lattice.candidateState(i, k)).toArray();
   }
 
   private static Set<Integer> openTags(UnknownWordModel unknown) {
     return IntStream.range(0, unknown.openTagCount()).mapToObj(unknown::openTag).collect(Collectors.toSet());
   }
 
+  /** The lexicon holds states; each stands for one tag. */
   private static Set<Integer> lexiconTags(int word) {
     Lexicon lexicon = MODEL.lexicon();
-    return IntStream.range(0, lexicon.tagCount(word)).mapToObj(k -> lexicon.tag(word, k)).collect(Collectors.toSet());
+    return IntStream.range(0, lexicon.tagCount(word))
+        .mapToObj(k -> MODEL.states().tagOf(lexicon.tag(word, k))).collect(Collectors.toSet());
+  }
+
+  /** An unknown capitalised first word is looked up in lower case when the model asks for it. */
+  private static int lookupAsTheLatticeDoes(String token, int position) {
+    int word = MODEL.lexicon().lookup(token);
+    if (word < 0 && position == 0 && MODEL.cues().lowercaseFirstWord() && Character.isUpperCase(token.charAt(0))) {
+      word = MODEL.lexicon().lookup(token.toLowerCase(java.util.Locale.ROOT));
+    }
+    return word;
   }
 }

@@ -34,8 +34,16 @@ class DocumentedLayoutTest {
     for (String name : model.tags().names()) {
       assertEquals(name, string());
     }
-    assertArrayEquals(model.logBigramTable(), doubles(model.logBigramTable().length));
-    assertArrayEquals(model.logTrigramTable(), doubles(model.logTrigramTable().length));
+    StateSpace states = model.states();
+    assertEquals(states.size(), vint());
+    for (int s = 0; s < states.size(); s++) {
+      assertEquals(states.tagOf(s), vint());
+      assertEquals(states.flags(s), in.get());
+    }
+    assertEquals(model.cues().lowercaseFirstWord() ? 1 : 0, in.get());
+    assertEquals(model.cues().unseenContextLogWeight(), in.getDouble());
+    assertArrayEquals(model.logBigramTable(), floats(model.logBigramTable().length));
+    assertArrayEquals(model.logTrigramTable(), floats(model.logTrigramTable().length));
     lexicon(model.lexicon());
     unknownWords(model.unknownWords());
     footer();
@@ -52,9 +60,17 @@ class DocumentedLayoutTest {
     for (Lexicon.Entry e : lexicon.entries()) {
       assertEquals(e.word(), string());
       assertEquals(e.tags().length, vint());
+      assertEquals(e.hasContexts() ? 1 : 0, in.get());
       for (int k = 0; k < e.tags().length; k++) {
         assertEquals(e.tags()[k], vint());
         assertEquals(e.logEmissions()[k], Float.intBitsToFloat(in.getInt()));
+        if (e.hasContexts()) {
+          assertEquals(e.contextStates()[k].length, vint());
+          for (int j = 0; j < e.contextStates()[k].length; j++) {
+            assertEquals(e.contextStates()[k][j], vint());
+            assertEquals(e.contextLogEmissions()[k][j], Float.intBitsToFloat(in.getInt()));
+          }
+        }
       }
     }
   }
@@ -123,6 +139,15 @@ class DocumentedLayoutTest {
     byte[] utf8 = new byte[vint()];
     in.get(utf8);
     return new String(utf8, StandardCharsets.UTF_8);
+  }
+
+  /** float32 values, widened as the model holds them. */
+  private double[] floats(int count) {
+    double[] out = new double[count];
+    for (int i = 0; i < count; i++) {
+      out[i] = in.getFloat();
+    }
+    return out;
   }
 
   private double[] doubles(int count) {

@@ -153,7 +153,8 @@ class ModelFileForeignTest {
       out.writeVInt(1);
       out.writeString("word");
       out.writeVInt(1);
-      out.writeVInt(7); // tag 7 of a 2-tag set
+      out.writeByte((byte) 0); // no contexts
+      out.writeVInt(7); // state 7 of a 2-state model
       out.writeInt(0);
     });
     assertMessage(bytes, "tag index 7 out of range");
@@ -182,8 +183,15 @@ class ModelFileForeignTest {
     out.writeVInt(2);
     out.writeString("A");
     out.writeString("B");
+    out.writeVInt(2); // one state per tag
+    for (int tag = 0; tag < 2; tag++) {
+      out.writeVInt(tag);
+      out.writeByte((byte) 0);
+    }
+    out.writeByte((byte) 0); // no lower-case lookup of first words
+    out.writeLong(Double.doubleToLongBits(0));
     for (int i = 0; i < 9 + 27; i++) {
-      out.writeLong(Double.doubleToLongBits(Math.log(1.0 / 3)));
+      out.writeInt(Float.floatToIntBits((float) Math.log(1.0 / 3)));
     }
   }
 

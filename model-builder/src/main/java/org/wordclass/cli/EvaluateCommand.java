@@ -4,6 +4,8 @@ import java.io.IOException;
 import java.nio.file.Path;
 import org.wordclass.corpus.Corpus;
 import org.wordclass.corpus.TagColumn;
+import java.util.function.Consumer;
+import org.wordclass.corpus.Sentence;
 import org.wordclass.evaluation.Evaluation;
 import org.wordclass.evaluation.EvaluationReport;
 import org.wordclass.model.HmmModel;
@@ -22,6 +24,9 @@ final class EvaluateCommand extends BaseCommand {
   @Mixin
   CorpusOptions corpus;
 
+  @Mixin
+  AnalyzerOptions analysis;
+
   @Option(names = "--report", paramLabel = "FILE", description = "Also write the figures as JSON.")
   Path json;
 
@@ -38,9 +43,20 @@ final class EvaluateCommand extends BaseCommand {
     Corpus input = corpus.open(Provenance.tagColumn(loaded, TagColumn.UPOS));
     Progress progress = Progress.start("evaluate", input, 1, err());
     Evaluation evaluation = new Evaluation(loaded);
-    progress.read(input, evaluation::add);
+    Evaluation onGoldTokens = new Evaluation(loaded);
+    try {
+      Consumer<Sentence> analyzed = analysis.feeding(evaluation::add);
+      progress.read(input, analysis.enabled ? s -> {
+        onGoldTokens.add(s);
+        analyzed.accept(s);
+      } : evaluation::add);
+    } finally {
+      analysis.close();
+    }
     progress.finish();
-    EvaluationReport report = evaluation.report();
+    EvaluationReport report = analysis.enabled
+        ? evaluation.report().throughAnalyzer(analysis.chain().toString(), onGoldTokens.report(), analysis.alignmentCounts())
+        : evaluation.report();
     out().print(report.toText());
     out().flush();
     writeFiles(report, "Evaluation of " + model.name() + " on " + fileNames(input));

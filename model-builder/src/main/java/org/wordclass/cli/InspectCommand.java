@@ -16,6 +16,7 @@ import org.apache.lucene.store.ByteBuffersDataInput;
 import org.apache.lucene.store.ByteBuffersIndexInput;
 import org.apache.lucene.store.IndexInput;
 import org.wordclass.model.HmmModel;
+import org.wordclass.model.StateSpace;
 import org.wordclass.model.ModelFile;
 import org.wordclass.model.SuffixTrie;
 import org.wordclass.model.TagSet;
@@ -107,6 +108,12 @@ final class InspectCommand extends BaseCommand {
     return sizes;
   }
 
+  /** A state's tag, marked {@code ^} for the state of words written with a capital in mid-sentence. */
+  private static String stateName(HmmModel m, int state) {
+    String tag = m.tags().name(m.states().tagOf(state));
+    return (m.states().flags(state) & StateSpace.CAPITALISED) != 0 ? tag + "^" : tag;
+  }
+
   /** The most probable transitions of the first-order chain, the boundary named as start or end. */
   static List<Transition> strongestTransitions(HmmModel m) {
     TagSet tags = m.tags();
@@ -117,8 +124,8 @@ final class InspectCommand extends BaseCommand {
         if (from == boundary && to == boundary) {
           continue; // an empty sentence says nothing about the tags
         }
-        all.add(new Transition(from == boundary ? SENTENCE_START : tags.name(from),
-            to == boundary ? SENTENCE_END : tags.name(to), Math.exp(m.logBigram(from, to))));
+        all.add(new Transition(from == boundary ? SENTENCE_START : stateName(m, from),
+            to == boundary ? SENTENCE_END : stateName(m, to), Math.exp(m.logBigram(from, to))));
       }
     }
     all.sort(Comparator.comparingDouble(Transition::probability).reversed()

@@ -6,6 +6,7 @@ import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.Locale;
+import java.util.Map;
 import org.wordclass.corpus.Corpus;
 import org.wordclass.corpus.TagColumn;
 import org.wordclass.model.HmmModel;
@@ -28,6 +29,9 @@ final class TrainCommand extends BaseCommand {
   @Mixin
   TrainingOptionsMixin training;
 
+  @Mixin
+  AnalyzerOptions analysis;
+
   @Option(names = "--out", required = true, paramLabel = "MODEL", description = "The model file to write (.wcm).")
   Path out;
 
@@ -37,15 +41,24 @@ final class TrainCommand extends BaseCommand {
     Corpus input = corpus.open(TagColumn.UPOS);
     Progress progress = Progress.start("train", input, 1, err());
     TagCounts counts = new TagCounts();
-    progress.read(input, s -> counts.add(s.words(), s.tags()));
+    try {
+      progress.read(input, analysis.feeding(s -> counts.add(s.words(), s.tags())));
+    } finally {
+      analysis.close();
+    }
     progress.finish();
-    HmmModel model = new HmmEstimator(options).estimate(counts, Provenance.of(input, corpus));
+    Map<String, String> provenance = Provenance.of(input, corpus);
+    analysis.describeInto(provenance);
+    HmmModel model = new HmmEstimator(options).estimate(counts, provenance);
     ModelFile.write(model, out);
     printSummary(counts, model, progress.seconds());
     return OK;
   }
 
   private void printSummary(TagCounts counts, HmmModel model, double seconds) throws IOException {
+    if (analysis.alignmentCounts() != null) {
+      out().printf(Locale.ROOT, "analyzer    %s %s%n", analysis.chain(), analysis.alignmentCounts());
+    }
     out().printf(Locale.ROOT, "sentences   %d%n", counts.sentences());
     out().printf(Locale.ROOT, "tokens      %d%n", counts.tokens());
     out().printf(Locale.ROOT, "tags        %d%n", model.tags().size());

@@ -50,11 +50,32 @@ final class TrainingOptionsMixin {
           + "Default: ${DEFAULT-VALUE}.")
   boolean shapeClasses;
 
+  @Option(names = "--capitalisation-states", negatable = true, fallbackValue = "true",
+      description = "Give each class a second state for words written with a capital in mid-sentence, "
+          + "so that transitions can tell names from other words. Default: ${DEFAULT-VALUE}.")
+  boolean capitalisationStates;
+
+  @Option(names = "--context-emissions", negatable = true, fallbackValue = "true",
+      description = "Let a known word's probability depend on the previous class too, where the training "
+          + "data shows it. Default: ${DEFAULT-VALUE}.")
+  boolean contextEmissions;
+
+  @Option(names = "--lowercase-first-word", negatable = true, fallbackValue = "true",
+      description = "Look an unknown capitalised first word of a sentence up in lower case. "
+          + "Default: ${DEFAULT-VALUE}.")
+  boolean lowercaseFirstWord;
+
+  @Option(names = "--context-min-count", paramLabel = "N",
+      description = "Keep a word's context-dependent probability only for contexts seen at least N times. "
+          + "Default: ${DEFAULT-VALUE}.")
+  int contextMinCount;
+
   /** The options given; a value the estimator refuses is reported as a usage error. */
   TrainingOptions toOptions() {
     try {
       TrainingOptions options = new TrainingOptions(order, maxSuffixLength, rareWordMaxCount,
-          TrainingOptions.SuffixWeightRule.HELD_OUT, Double.NaN, openClassMinShare, shapeClasses);
+          TrainingOptions.SuffixWeightRule.HELD_OUT, Double.NaN, openClassMinShare, shapeClasses,
+          capitalisationStates, contextEmissions, lowercaseFirstWord, contextMinCount);
       return withSuffixWeight(options, suffixWeight);
     } catch (IllegalArgumentException e) {
       throw new ParameterException(mixee.commandLine(), "Invalid training option: " + e.getMessage());

@@ -27,7 +27,7 @@ public final class WordOffsets {
     while (word < n) {
       Sentence.MultiwordToken token = sentence.multiwordTokenStartingAt(word);
       String surface = token != null ? token.form() : sentence.words().get(word);
-      while (pos < text.length() && Character.isWhitespace(text.charAt(pos))) {
+      while (pos < text.length() && isSpace(text.charAt(pos))) {
         pos++;
       }
       if (!text.startsWith(surface, pos)) {
@@ -40,6 +40,11 @@ public final class WordOffsets {
       word = last + 1;
     }
     return offsets;
+  }
+
+  /** White space between words, including the no-break space that CoNLL-U records as {@code SpacesAfter=\u00A0}. */
+  private static boolean isSpace(char c) {
+    return Character.isWhitespace(c) || Character.isSpaceChar(c);
   }
 
   private static void assign(Sentence sentence, int first, int last, int start, String surface, int[] offsets) {

@@ -1,15 +1,20 @@
 package org.wordclass.evaluation;
 
+import com.fasterxml.jackson.annotation.JsonInclude;
 import java.util.ArrayList;
 import java.util.Comparator;
 import java.util.List;
 import java.util.Locale;
+import java.util.Map;
 
 /**
  * The result of an evaluation, shaped for JSON output (Jackson serialises the record
  * components): the top level holds {@code accuracy}, {@code knownAccuracy}, {@code
- * unknownAccuracy} (fractions in 0..1) and {@code tokens}.
+ * unknownAccuracy} (fractions in 0..1) and {@code tokens}. When the tokens came from an
+ * analysis chain, {@code goldTokens} holds the report on the treebank's own tokens and {@code
+ * alignment} how the two were matched; both are absent otherwise.
  */
+@JsonInclude(JsonInclude.Include.NON_NULL)
 public record EvaluationReport(
     double accuracy,
     double knownAccuracy,
@@ -24,7 +29,13 @@ public record EvaluationReport(
     int order,
     List<TagScore> perTag,
     List<Confusion> topConfusions,
-    ConfusionMatrix confusionMatrix) {
+    ConfusionMatrix confusionMatrix,
+    String tokenSource,
+    EvaluationReport goldTokens,
+    Map<String, Long> alignment) {
+
+  /** Where the scored tokens came from when they are the gold tokens themselves. */
+  public static final String GOLD_TOKENS = "gold tokens";
 
   /** Precision, recall and F1 of one tag; support is its number of gold tokens. */
   public record TagScore(String tag, double precision, double recall, double f1, long support) {}
@@ -71,12 +82,28 @@ public record EvaluationReport(
         e.sentences(), e.tokens() == 0 ? 0 : (double) unknown / e.tokens(), e.averageCandidates(),
         e.tokensPerSecond(), e.model().order(), perTag,
         List.copyOf(confusions.subList(0, Math.min(20, confusions.size()))),
-        new ConfusionMatrix(List.copyOf(labels), copy));
+        new ConfusionMatrix(List.copyOf(labels), copy), GOLD_TOKENS, null, null);
+  }
+
+  /**
+   * This report, of tokens emitted by an analysis chain, with the report on the gold tokens of
+   * the same sentences beside it and the counts of how the two were aligned.
+   */
+  public EvaluationReport throughAnalyzer(String chain, EvaluationReport gold, Map<String, Long> alignmentCounts) {
+    return new EvaluationReport(accuracy, knownAccuracy, unknownAccuracy, tokens, knownTokens, unknownTokens,
+        sentences, unknownShare, averageCandidatesPerToken, tokensPerSecond, order, perTag, topConfusions,
+        confusionMatrix, "analyzer tokens: " + chain, gold, alignmentCounts);
   }
 
   /** A plain-text summary for the terminal. */
   public String toText() {
     StringBuilder s = new StringBuilder();
+    if (goldTokens != null) {
+      s.append(String.format(Locale.ROOT, "tokens from      %s%n", tokenSource));
+      s.append(String.format(Locale.ROOT, "gold-token accuracy %.4f (%d tokens); on analyzer tokens:%n",
+          goldTokens.accuracy(), goldTokens.tokens()));
+      alignment.forEach((k, v) -> s.append(String.format(Locale.ROOT, "  %-22s %d%n", k, v)));
+    }
     s.append(String.format(Locale.ROOT, "tokens           %d in %d sentences%n", tokens, sentences));
     s.append(String.format(Locale.ROOT, "accuracy         %.4f%n", accuracy));
     s.append(String.format(Locale.ROOT, "known words      %.4f  (%d tokens)%n", knownAccuracy, knownTokens));

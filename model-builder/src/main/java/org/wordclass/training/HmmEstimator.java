@@ -22,7 +22,10 @@ import org.wordclass.model.WordShape;
  *       count, for the estimate that predicts it best when it is left out of the counts); a
  *       context never seen falls back to the next lower order, so no allowed path scores
  *       -Infinity;
- *   <li>emissions of known words: {@code P(w|t) = c(w,t) / c(t)};
+ *   <li>emissions of known words: {@code P(w|s) = c(w,s) / c(s)}, and, where enabled, also
+ *       conditioned on the previous state (Thede and Harper 1999), smoothed back to {@code P(w|s)};
+ *   <li>states: one per tag, or, where enabled, tags split by whether the word was written with
+ *       a capital in mid-sentence (Brants 2000);
  *   <li>unknown words: see {@link UnknownWordModel}.
  * </ul>
  *
@@ -44,25 +47,30 @@ public final class HmmEstimator {
     Collections.sort(sorted);
     TagSet tagSet = new TagSet(sorted);
     int tagCount = sorted.size();
-    int[] finalId = new int[tagCount + 1]; // provisional state (0 = boundary) -> final state
+    int[] finalId = new int[tagCount + 1]; // provisional tag + 1 (0 = boundary) -> final tag
     finalId[0] = tagCount;
     for (int i = 0; i < tagCount; i++) {
       finalId[i + 1] = tagSet.indexOf(counts.tagNames().get(i));
     }
-    int states = tagCount + 1;
-    long[] tri = new long[states * states * states];
+    StatePlan plan = new StatePlan(counts, finalId, tagCount, options.capitalisationStates());
+    int n = plan.size() + 1;
+    long[] tri = new long[n * n * n];
     for (Map.Entry<Long, Long> e : counts.trigrams().entrySet()) {
       long key = e.getKey();
-      int a = finalId[(int) (key >>> 32)];
-      int b = finalId[(int) ((key >>> 16) & 0xFFFF)];
-      int c = finalId[(int) (key & 0xFFFF)];
-      tri[(a * states + b) * states + c] += e.getValue();
+      int a = plan.stateOfKey((int) (key >>> 32));
+      int b = plan.stateOfKey((int) ((key >>> 16) & 0xFFFF));
+      int c = plan.stateOfKey((int) (key & 0xFFFF));
+      tri[(a * n + b) * n + c] += e.getValue();
     }
-    Transitions transitions = new Transitions(tri, states);
+    Transitions transitions = new Transitions(tri, n);
 
+    Map<String, Map<Integer, Integer>> wordTags = counts.wordTags();
     long[] tagTokens = new long[tagCount];
-    List<Lexicon.Entry> entries = lexiconEntries(counts, finalId, tagTokens);
-    UnknownWordModel unknown = unknownWordModel(counts, finalId, tagTokens, tagSet);
+    wordTags.values().forEach(tags -> tags.forEach((tag, count) -> tagTokens[finalId[tag + 1]] += count));
+    List<Lexicon.Entry> entries = lexiconEntries(counts, plan, tri, n);
+    UnknownWordModel unknown = unknownWordModel(counts, wordTags, finalId, tagTokens, tagSet);
+    HmmModel.DecodingCues cues = new HmmModel.DecodingCues(options.lowercaseFirstWord(),
+        options.contextEmissions() ? Math.log(1 - contextWeight(0)) : 0);
 
     Map<String, String> all = new TreeMap<>(provenance);
     all.putAll(options.describe());
@@ -71,42 +79,98 @@ public final class HmmEstimator {
     all.put("smoothing.trigramWeights", transitions.describeTrigramWeights());
     all.put("smoothing.bigramWeights", transitions.describeBigramWeights());
     all.put("smoothing.suffixWeight", Double.toString(unknown.theta()));
-    return new HmmModel(options.order(), tagSet, transitions.logBigram(), transitions.logTrigram(),
+    return new HmmModel(options.order(), tagSet, plan.space(), cues, transitions.logBigram(), transitions.logTrigram(),
         new Lexicon(entries), unknown, all);
   }
 
-  private static List<Lexicon.Entry> lexiconEntries(TagCounts counts, int[] finalId, long[] tagTokens) {
-    TreeMap<String, Map<Integer, Integer>> byWord = new TreeMap<>(counts.wordTags());
-    for (Map<Integer, Integer> tags : byWord.values()) {
-      for (Map.Entry<Integer, Integer> e : tags.entrySet()) {
-        tagTokens[finalId[e.getKey() + 1]] += e.getValue();
+  /**
+   * Weight of a word's own context-dependent estimate {@code P^(w | s', s)} against its plain
+   * emission {@code P(w | s)} when the triple was seen {@code count} times; grows towards 1 with
+   * the evidence, as in Thede and Harper (1999) (formula from memory).
+   */
+  static double contextWeight(long count) {
+    double log = Math.log(count + 1);
+    return (log + 1) / (log + 2);
+  }
+
+  private List<Lexicon.Entry> lexiconEntries(TagCounts counts, StatePlan plan, long[] tri, int n) {
+    long[] stateTokens = new long[plan.size()];
+    counts.wordStates().values().forEach(states -> states.forEach((raw, count) -> stateTokens[plan.stateOf(raw)] += count));
+    long[] contextTokens = new long[n * n]; // c(previous state, state), from the trigram counts
+    for (int a = 0; a < n; a++) {
+      for (int bc = 0; bc < n * n; bc++) {
+        contextTokens[bc] += tri[a * n * n + bc];
       }
     }
+    TreeMap<String, Map<Integer, Integer>> byWord = new TreeMap<>(counts.wordStates());
     List<Lexicon.Entry> entries = new ArrayList<>(byWord.size());
     for (Map.Entry<String, Map<Integer, Integer>> word : byWord.entrySet()) {
-      TreeMap<Integer, Integer> tags = new TreeMap<>();
-      word.getValue().forEach((id, n) -> tags.put(finalId[id + 1], n));
-      int[] tagIds = new int[tags.size()];
-      float[] emissions = new float[tags.size()];
+      TreeMap<Integer, Long> states = new TreeMap<>();
+      word.getValue().forEach((raw, count) -> states.merge(plan.stateOf(raw), (long) count, Long::sum));
+      int[] ids = new int[states.size()];
+      float[] emissions = new float[states.size()];
       int k = 0;
-      for (Map.Entry<Integer, Integer> e : tags.entrySet()) {
-        tagIds[k] = e.getKey();
-        emissions[k] = (float) Math.log((double) e.getValue() / tagTokens[e.getKey()]);
+      for (Map.Entry<Integer, Long> e : states.entrySet()) {
+        ids[k] = e.getKey();
+        emissions[k] = (float) Math.log((double) e.getValue() / stateTokens[e.getKey()]);
         k++;
       }
-      entries.add(new Lexicon.Entry(word.getKey(), tagIds, emissions));
+      if (options.contextEmissions()) {
+        entries.add(withContexts(word.getKey(), ids, emissions, counts.wordContexts().get(word.getKey()), plan,
+            contextTokens, n, options.contextMinCount()));
+      } else {
+        entries.add(new Lexicon.Entry(word.getKey(), ids, emissions));
+      }
     }
     return entries;
   }
 
-  private UnknownWordModel unknownWordModel(TagCounts counts, int[] finalId, long[] tagTokens, TagSet tagSet) {
+  /**
+   * The entry with {@code P(w | s', s)} for every previous state s' seen at least {@code
+   * minCount} times before the word; rarer contexts use the plain emission, which keeps the model
+   * small at no measured cost in accuracy.
+   */
+  private static Lexicon.Entry withContexts(String word, int[] ids, float[] emissions, Map<Integer, Integer> contexts,
+      StatePlan plan, long[] contextTokens, int n, int minCount) {
+    List<TreeMap<Integer, Long>> perState = new ArrayList<>();
+    for (int k = 0; k < ids.length; k++) {
+      perState.add(new TreeMap<>());
+    }
+    contexts.forEach((key, count) -> {
+      if (count < minCount) {
+        return;
+      }
+      int previous = plan.stateOfKey(key >>> 16);
+      int k = Arrays.binarySearch(ids, plan.stateOfKey(key & 0xFFFF));
+      perState.get(k).merge(previous, (long) count, Long::sum);
+    });
+    int[][] contextStates = new int[ids.length][];
+    float[][] contextEmissions = new float[ids.length][];
+    for (int k = 0; k < ids.length; k++) {
+      TreeMap<Integer, Long> seen = perState.get(k);
+      contextStates[k] = new int[seen.size()];
+      contextEmissions[k] = new float[seen.size()];
+      int j = 0;
+      for (Map.Entry<Integer, Long> e : seen.entrySet()) {
+        double lambda = contextWeight(e.getValue());
+        double own = (double) e.getValue() / contextTokens[e.getKey() * n + ids[k]];
+        contextStates[k][j] = e.getKey();
+        contextEmissions[k][j] = (float) Math.log(lambda * own + (1 - lambda) * Math.exp(emissions[k]));
+        j++;
+      }
+    }
+    return new Lexicon.Entry(word, ids, emissions, contextStates, contextEmissions);
+  }
+
+  private UnknownWordModel unknownWordModel(TagCounts counts, Map<String, Map<Integer, Integer>> wordTags, int[] finalId,
+      long[] tagTokens, TagSet tagSet) {
     int tagCount = tagSet.size();
     long total = Arrays.stream(tagTokens).sum();
     double[] logPrior = new double[tagCount];
     for (int t = 0; t < tagCount; t++) {
       logPrior[t] = Math.log((double) tagTokens[t] / total);
     }
-    int[] openTags = openTags(counts, finalId, tagCount);
+    int[] openTags = openTags(wordTags, finalId, tagCount);
     int[] trieOfShape = trieOfShape();
     int trieCount = Arrays.stream(trieOfShape).max().getAsInt() + 1;
     SuffixTrie.Builder[] builders = new SuffixTrie.Builder[trieCount];
@@ -114,7 +178,7 @@ public final class HmmEstimator {
       builders[i] = new SuffixTrie.Builder();
     }
     long[] rareByTag = new long[tagCount];
-    TreeMap<String, Map<Integer, Integer>> byWord = new TreeMap<>(counts.wordTags());
+    TreeMap<String, Map<Integer, Integer>> byWord = new TreeMap<>(wordTags);
     for (Map.Entry<String, Map<Integer, Integer>> word : byWord.entrySet()) {
       int frequency = word.getValue().values().stream().mapToInt(Integer::intValue).sum();
       if (frequency > options.rareWordMaxCount()) {
@@ -145,7 +209,7 @@ public final class HmmEstimator {
     }
     UnknownWordModel model = new UnknownWordModel(1.0, options.maxSuffixLength(), openTags, logPrior, base, trieOfShape, tries);
     double theta = switch (options.suffixWeightRule()) {
-      case HELD_OUT -> SuffixWeightSelection.choose(model, counts, finalId, options.rareWordMaxCount());
+      case HELD_OUT -> SuffixWeightSelection.choose(model, wordTags, finalId, options.rareWordMaxCount());
       case TAG_SPREAD -> tagProbabilitySpread(tagTokens, total);
       case FIXED -> options.suffixWeight();
     };
@@ -153,10 +217,10 @@ public final class HmmEstimator {
   }
 
   /** Tags carried by at least the configured share of the words seen exactly once. */
-  private int[] openTags(TagCounts counts, int[] finalId, int tagCount) {
+  private int[] openTags(Map<String, Map<Integer, Integer>> wordTags, int[] finalId, int tagCount) {
     long[] hapaxByTag = new long[tagCount];
     long hapaxes = 0;
-    for (Map<Integer, Integer> tags : counts.wordTags().values()) {
+    for (Map<Integer, Integer> tags : wordTags.values()) {
       if (tags.size() == 1) {
         Map.Entry<Integer, Integer> only = tags.entrySet().iterator().next();
         if (only.getValue() == 1) {

@@ -17,13 +17,13 @@ final class SuffixWeightSelection {
 
   private SuffixWeightSelection() {}
 
-  static double choose(UnknownWordModel model, TagCounts counts, int[] finalId, int rareWordMaxCount) {
+  static double choose(UnknownWordModel model, Map<String, Map<Integer, Integer>> wordTags, int[] finalId, int rareWordMaxCount) {
     int open = model.openTagCount();
     double[] logLikelihood = new double[CANDIDATES.length];
     long[] heldOut = new long[open];
     double[] scratch = new double[open];
     double[] dist = new double[open];
-    for (Map.Entry<String, Map<Integer, Integer>> word : counts.wordTags().entrySet()) {
+    for (Map.Entry<String, Map<Integer, Integer>> word : wordTags.entrySet()) {
       Map<Integer, Integer> tags = word.getValue();
       int frequency = tags.values().stream().mapToInt(Integer::intValue).sum();
       if (frequency > rareWordMaxCount) {

@@ -7,16 +7,20 @@ import java.util.Map;
 
 /**
  * The counts an HMM is estimated from, gathered one sentence at a time: how often each word
- * carries each tag, and how often each tag follows each pair of tags (with the sentence boundary
- * as an extra tag). Memory grows with the vocabulary and the number of distinct tag trigrams,
- * not with the corpus, so a corpus larger than memory can be counted.
+ * carries each tag, after which state it does, and how often each state follows each pair of
+ * states (with the sentence boundary as an extra state). Memory grows with the vocabulary and
+ * the number of distinct trigrams, not with the corpus, so a corpus larger than memory can be
+ * counted.
  *
- * <p>Tags get provisional ids in order of first appearance; {@link HmmEstimator} sorts them.
+ * <p>Counts are kept per raw state: a tag together with whether the word was written with a
+ * capital in mid-sentence, so that {@link HmmEstimator} can choose to split tags by that cue or
+ * not. Tags get provisional ids in order of first appearance; the estimator sorts them.
  */
 public final class TagCounts {
   private final Map<String, Integer> tagIds = new HashMap<>();
   private final List<String> tagNames = new ArrayList<>();
-  private final Map<String, Map<Integer, Integer>> wordTags = new HashMap<>();
+  private final Map<String, Map<Integer, Integer>> wordStates = new HashMap<>();
+  private final Map<String, Map<Integer, Integer>> wordContexts = new HashMap<>();
   private final Map<Long, Long> trigrams = new HashMap<>();
   private long sentences;
   private long tokens;
@@ -33,9 +37,11 @@ public final class TagCounts {
     int a = 0;
     int b = 0;
     for (int i = 0; i < words.size(); i++) {
-      int tag = tagId(tags.get(i));
-      wordTags.computeIfAbsent(words.get(i), w -> new HashMap<>(2)).merge(tag, 1, Integer::sum);
-      int c = tag + 1;
+      String word = words.get(i);
+      int state = rawState(tagId(tags.get(i)), i > 0 && startsWithCapital(word));
+      wordStates.computeIfAbsent(word, w -> new HashMap<>(2)).merge(state, 1, Integer::sum);
+      int c = state + 1;
+      wordContexts.computeIfAbsent(word, w -> new HashMap<>(2)).merge((b << 16) | c, 1, Integer::sum);
       trigrams.merge(key(a, b, c), 1L, Long::sum);
       a = b;
       b = c;
@@ -44,10 +50,27 @@ public final class TagCounts {
     trigrams.merge(key(a, b, 0), 1L, Long::sum);
   }
 
+  private static boolean startsWithCapital(String word) {
+    return !word.isEmpty() && (Character.isUpperCase(word.charAt(0)) || Character.isTitleCase(word.charAt(0)));
+  }
+
+  /** A tag id with the capitalisation bit. */
+  static int rawState(int tagId, boolean capitalised) {
+    return 2 * tagId + (capitalised ? 1 : 0);
+  }
+
+  static int tagOfRawState(int rawState) {
+    return rawState >> 1;
+  }
+
+  static boolean isCapitalised(int rawState) {
+    return (rawState & 1) != 0;
+  }
+
   private int tagId(String tag) {
     Integer id = tagIds.get(tag);
     if (id == null) {
-      if (tagNames.size() >= Short.MAX_VALUE - 1) {
+      if (tagNames.size() >= (1 << 14) - 1) {
         throw new IllegalArgumentException("too many distinct tags");
       }
       id = tagNames.size();
@@ -57,7 +80,7 @@ public final class TagCounts {
     return id;
   }
 
-  /** Packs three states (0 = boundary, tag id + 1 otherwise). */
+  /** Packs three raw states, each plus one (0 = boundary). */
   static long key(int a, int b, int c) {
     return ((long) a << 32) | ((long) b << 16) | c;
   }
@@ -74,10 +97,28 @@ public final class TagCounts {
     return tagNames;
   }
 
-  Map<String, Map<Integer, Integer>> wordTags() {
-    return wordTags;
+  /** Word to raw state to count. */
+  Map<String, Map<Integer, Integer>> wordStates() {
+    return wordStates;
   }
 
+  /** Word to (previous raw state + 1) << 16 | (raw state + 1) to count. */
+  Map<String, Map<Integer, Integer>> wordContexts() {
+    return wordContexts;
+  }
+
+  /** Word to provisional tag id to count, whatever the capitalisation. */
+  Map<String, Map<Integer, Integer>> wordTags() {
+    Map<String, Map<Integer, Integer>> out = new HashMap<>(wordStates.size() * 2);
+    wordStates.forEach((word, states) -> {
+      Map<Integer, Integer> tags = new HashMap<>(2);
+      states.forEach((state, n) -> tags.merge(tagOfRawState(state), n, Integer::sum));
+      out.put(word, tags);
+    });
+    return out;
+  }
+
+  /** Raw-state trigrams, packed by {@link #key}. */
   Map<Long, Long> trigrams() {
     return trigrams;
   }

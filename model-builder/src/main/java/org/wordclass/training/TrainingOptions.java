@@ -1,11 +1,13 @@
 package org.wordclass.training;
 
 import java.util.LinkedHashMap;
+import java.util.Locale;
 import java.util.Map;
 
 /**
  * Everything that shapes a trained model besides its corpus. Every value is written into the
- * model's provenance, so a model says how it was built.
+ * model's provenance, so a model says how it was built. The defaults give the most accurate
+ * model; each cue can be switched off for a simpler or smaller one.
  *
  * @param order 1 (bigram) or 2 (trigram) HMM; both tables are estimated, this is the default
  *     decoding order
@@ -17,6 +19,13 @@ import java.util.Map;
  *     share of the words seen once in training carry it
  * @param shapeClasses keep separate ending counts for each {@link org.wordclass.model.WordShape};
  *     when false, only capitalised and lower-case words are told apart, as in Brants (2000)
+ * @param capitalisationStates split each tag into a state for words written with a capital in
+ *     mid-sentence and one for the rest, so transitions can tell them apart (Brants 2000)
+ * @param contextEmissions let a known word's emission depend on the previous state as well
+ *     (second-order lexical probabilities, Thede and Harper 1999)
+ * @param lowercaseFirstWord look an unknown capitalised sentence-initial word up in lower case
+ * @param contextMinCount a word's emission after a particular previous state is kept only if
+ *     that context was seen at least this often
  */
 public record TrainingOptions(
     int order,
@@ -25,9 +34,17 @@ public record TrainingOptions(
     SuffixWeightRule suffixWeightRule,
     double suffixWeight,
     double openClassMinShare,
-    boolean shapeClasses) {
+    boolean shapeClasses,
+    boolean capitalisationStates,
+    boolean contextEmissions,
+    boolean lowercaseFirstWord,
+    int contextMinCount) {
 
-  public static final TrainingOptions DEFAULTS = new TrainingOptions(2, 10, 10, SuffixWeightRule.HELD_OUT, Double.NaN, 0.002, false);
+  public static final TrainingOptions DEFAULTS =
+      new TrainingOptions(2, 10, 10, SuffixWeightRule.HELD_OUT, Double.NaN, 0.002, false, true, true, true, 3);
+
+  /** The classic second-order model with a suffix model and none of the later cues. */
+  public static final TrainingOptions CLASSIC = DEFAULTS.withCues(false, false, false);
 
   /** How θ of the suffix model is chosen. */
   public enum SuffixWeightRule {
@@ -52,35 +69,50 @@ public record TrainingOptions(
     if (suffixWeightRule == SuffixWeightRule.FIXED && !(suffixWeight > 0 && suffixWeight < Double.POSITIVE_INFINITY)) {
       throw new IllegalArgumentException("suffix weight must be positive: " + suffixWeight);
     }
+    if (contextMinCount < 1) {
+      throw new IllegalArgumentException("context count must be at least 1: " + contextMinCount);
+    }
     if (!(openClassMinShare >= 0 && openClassMinShare < 1)) {
       throw new IllegalArgumentException("open-class share must be in [0, 1): " + openClassMinShare);
     }
   }
 
   public TrainingOptions withOrder(int newOrder) {
-    return new TrainingOptions(newOrder, maxSuffixLength, rareWordMaxCount, suffixWeightRule, suffixWeight, openClassMinShare, shapeClasses);
+    return new TrainingOptions(newOrder, maxSuffixLength, rareWordMaxCount, suffixWeightRule, suffixWeight,
+        openClassMinShare, shapeClasses, capitalisationStates, contextEmissions, lowercaseFirstWord, contextMinCount);
   }
 
   /** A fixed θ. */
   public TrainingOptions withSuffixWeight(double weight) {
-    return new TrainingOptions(order, maxSuffixLength, rareWordMaxCount, SuffixWeightRule.FIXED, weight, openClassMinShare, shapeClasses);
+    return new TrainingOptions(order, maxSuffixLength, rareWordMaxCount, SuffixWeightRule.FIXED, weight,
+        openClassMinShare, shapeClasses, capitalisationStates, contextEmissions, lowercaseFirstWord, contextMinCount);
   }
 
   /** θ chosen by a rule rather than given. */
   public TrainingOptions withSuffixWeightRule(SuffixWeightRule rule) {
-    return new TrainingOptions(order, maxSuffixLength, rareWordMaxCount, rule, Double.NaN, openClassMinShare, shapeClasses);
+    return new TrainingOptions(order, maxSuffixLength, rareWordMaxCount, rule, Double.NaN,
+        openClassMinShare, shapeClasses, capitalisationStates, contextEmissions, lowercaseFirstWord, contextMinCount);
   }
 
   public TrainingOptions withShapeClasses(boolean shapes) {
-    return new TrainingOptions(order, maxSuffixLength, rareWordMaxCount, suffixWeightRule, suffixWeight, openClassMinShare, shapes);
+    return new TrainingOptions(order, maxSuffixLength, rareWordMaxCount, suffixWeightRule, suffixWeight,
+        openClassMinShare, shapes, capitalisationStates, contextEmissions, lowercaseFirstWord, contextMinCount);
   }
 
   public TrainingOptions withSuffix(int maxLength, int rareMaxCount) {
-    return new TrainingOptions(order, maxLength, rareMaxCount, suffixWeightRule, suffixWeight, openClassMinShare, shapeClasses);
+    return new TrainingOptions(order, maxLength, rareMaxCount, suffixWeightRule, suffixWeight,
+        openClassMinShare, shapeClasses, capitalisationStates, contextEmissions, lowercaseFirstWord, contextMinCount);
   }
 
   public TrainingOptions withOpenClassMinShare(double share) {
-    return new TrainingOptions(order, maxSuffixLength, rareWordMaxCount, suffixWeightRule, suffixWeight, share, shapeClasses);
+    return new TrainingOptions(order, maxSuffixLength, rareWordMaxCount, suffixWeightRule, suffixWeight,
+        share, shapeClasses, capitalisationStates, contextEmissions, lowercaseFirstWord, contextMinCount);
+  }
+
+  /** The three cues beyond the classic model, each on or off. */
+  public TrainingOptions withCues(boolean capitalisation, boolean context, boolean lowercaseFirst) {
+    return new TrainingOptions(order, maxSuffixLength, rareWordMaxCount, suffixWeightRule, suffixWeight,
+        openClassMinShare, shapeClasses, capitalisation, context, lowercaseFirst, contextMinCount);
   }
 
   /** The options as provenance entries. */
@@ -90,9 +122,13 @@ public record TrainingOptions(
     m.put("option.maxSuffixLength", Integer.toString(maxSuffixLength));
     m.put("option.rareWordMaxCount", Integer.toString(rareWordMaxCount));
     m.put("option.suffixWeight", suffixWeightRule == SuffixWeightRule.FIXED
-        ? Double.toString(suffixWeight) : suffixWeightRule.name().toLowerCase(java.util.Locale.ROOT).replace('_', '-'));
+        ? Double.toString(suffixWeight) : suffixWeightRule.name().toLowerCase(Locale.ROOT).replace('_', '-'));
     m.put("option.openClassMinShare", Double.toString(openClassMinShare));
     m.put("option.shapeClasses", Boolean.toString(shapeClasses));
+    m.put("option.capitalisationStates", Boolean.toString(capitalisationStates));
+    m.put("option.contextEmissions", Boolean.toString(contextEmissions));
+    m.put("option.lowercaseFirstWord", Boolean.toString(lowercaseFirstWord));
+    m.put("option.contextMinCount", Integer.toString(contextMinCount));
     return m;
   }
 }

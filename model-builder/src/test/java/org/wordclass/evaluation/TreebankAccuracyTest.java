@@ -53,7 +53,7 @@ class TreebankAccuracyTest {
     assertTrue(second.accuracy() > first.accuracy(), "second order should beat first order");
 
     Evaluation baseline = new Evaluation(model);
-    MostFrequentTagBaseline mostFrequent = new MostFrequentTagBaseline(model);
+    MostFrequentTagBaseline mostFrequent = new MostFrequentTagBaseline(model, new Corpus(List.of(train), null, TagColumn.UPOS));
     new Corpus(List.of(test), null, TagColumn.UPOS).forEach(s -> mostFrequent.addTo(baseline, s));
     System.out.printf(Locale.ROOT, "most-frequent-tag baseline: %.4f%n", baseline.accuracy());
     assertTrue(first.accuracy() > baseline.accuracy() + 0.02, "an HMM should clearly beat the most-frequent-tag baseline");
