@@ -50,7 +50,7 @@ public final class HmmEstimator {
       finalId[i + 1] = tagSet.indexOf(counts.tagNames().get(i));
     }
     int states = tagCount + 1;
-    long[] tri = new long[states * states * states];
+    double[] tri = new double[states * states * states];
     for (Map.Entry<Long, Long> e : counts.trigrams().entrySet()) {
       long key = e.getKey();
       int a = finalId[(int) (key >>> 32)];
@@ -58,7 +58,7 @@ public final class HmmEstimator {
       int c = finalId[(int) (key & 0xFFFF)];
       tri[(a * states + b) * states + c] += e.getValue();
     }
-    Transitions transitions = new Transitions(tri, states);
+    Transitions transitions = Transitions.ofTrigrams(tri, states, Transitions.Smoothing.DELETED_INTERPOLATION);
 
     long[] tagTokens = new long[tagCount];
     List<Lexicon.Entry> entries = lexiconEntries(counts, finalId, tagTokens);
