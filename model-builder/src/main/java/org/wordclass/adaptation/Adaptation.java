@@ -41,8 +41,8 @@ public final class Adaptation {
     /** {@code sentences} read so far in the current pass (every {@value ExpectationPass#PROGRESS_EVERY}). */
     default void progress(int iteration, long sentences) {}
 
-    /** One model measured. */
-    default void iterationFinished(Iteration iteration) {}
+    /** One model measured; {@code model} is that iteration's model, before provenance is added. */
+    default void iterationFinished(Iteration iteration, HmmModel model) {}
   }
 
   /**
@@ -136,7 +136,7 @@ public final class Adaptation {
     double accuracy = heldOut == null ? Double.NaN : accuracy(model, heldOut);
     Iteration iteration = new Iteration(number, counts.logLikelihood, gain, counts.sentences, counts.tokens,
         counts.impossible, model.lexicon().size(), accuracy, (System.nanoTime() - began) / 1e9);
-    listener.iterationFinished(iteration);
+    listener.iterationFinished(iteration, model);
     return iteration;
   }
 

@@ -20,7 +20,9 @@ import org.wordclass.corpus.AnalysisChain;
  * ends a sentence. Inside a paragraph, sentences end where the JDK's sentence {@link
  * BreakIterator} (root locale) puts a boundary: after {@code .}, {@code !} or {@code ?} (with any
  * closing quotes or brackets) followed by white space and a word that does not continue the
- * sentence, and after a paragraph separator. Sentence ends cannot be taken from the tokens,
+ * sentence, and after a paragraph separator (a full stop inside a number does not end one; one
+ * after an abbreviation followed by a capital does, a known limit of so simple a rule, and a
+ * harmless one for re-estimation). Sentence ends cannot be taken from the tokens,
  * since the standard tokenizer drops punctuation. A paragraph longer than {@link
  * #MAX_PARAGRAPH_CHARS} is cut at a line end, which bounds memory on text without blank lines.
  *
