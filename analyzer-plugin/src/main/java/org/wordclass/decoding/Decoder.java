@@ -11,7 +11,9 @@ import org.wordclass.model.HmmModel;
  * <p>Cost per token with K candidates per token: Viterbi O(K^2) at order 1 and O(K^3) at order
  * 2; forward-backward about twice that. Memory is O(n K^2) for n tokens, in buffers that are
  * kept and reused, so steady-state decoding allocates nothing. Forward-backward runs in linear
- * space with one scale factor per token, so long sequences do not underflow.
+ * space with one scale factor per token, so long sequences do not underflow. After it, {@link
+ * #addExpectedTransitions} gives the expected transition counts that Baum-Welch re-estimation
+ * needs, at the cost of one more forward-like pass.
  *
  * <p>Not thread-safe: one per thread; the model it reads is shared.
  */
@@ -33,7 +35,9 @@ public final class Decoder {
   private double[] beta = new double[1024];
   private double[] scaledEmission = new double[256];
   private double[] posterior = new double[256];
+  private double[] betaSum = new double[64];
   private double bestLogProbability;
+  private double lastLogLikelihood = Double.NEGATIVE_INFINITY;
   private double maxEmissionSum;
 
   /** A decoder of the order the model was trained for. */
@@ -96,6 +100,9 @@ public final class Decoder {
       total += order == 2 ? count(i - 1) * count(i) : count(i);
     }
     stateStart[n] = total;
+    if (betaSum.length < n) {
+      betaSum = new double[Math.max(n, betaSum.length * 2)];
+    }
     if (score.length < total) {
       int grown = Math.max(total, score.length * 2);
       score = new double[grown];
@@ -245,6 +252,7 @@ public final class Decoder {
     layOutStates();
     scaleEmissions(n);
     double logLikelihood = order == 2 ? forwardBackwardSecondOrder(n) : forwardBackwardFirstOrder(n);
+    lastLogLikelihood = logLikelihood;
     for (int i = 0; i < n; i++) {
       int base = lattice.candidateOffset(i);
       double sum = 0;
@@ -276,6 +284,109 @@ public final class Decoder {
       }
     }
     return p;
+  }
+
+  /**
+   * Adds to {@code counts} the expected number of times each transition is taken in the sequence
+   * of the last {@link #forwardBackward} call, given the whole sequence: the expectation step of
+   * Baum-Welch (forward-backward) re-estimation. At order 1 these are the pair posteriors
+   * ξ(j, k) summed over positions, indexed like {@link HmmModel#bigramIndex}; at order 2 the
+   * expected trigram counts over (h, j, k), indexed like {@link HmmModel#trigramIndex}. The
+   * transitions from and to the sentence boundary are included, so a sequence of n tokens adds
+   * n + 1 in total. The expected emission counts are the candidate posteriors, {@link #posterior}.
+   *
+   * <p>Cost: one more pass like the forward pass, O(n K^2) at order 1 and O(n K^3) at order 2. It
+   * reuses the scaled forward and backward values that forwardBackward kept, with the per-position
+   * normaliser of the backward pass, and allocates nothing. An empty sequence, or one the model
+   * gives probability zero, adds nothing. The lattice must not change in between.
+   *
+   * @param counts {@code (T+1)^2} entries at order 1, {@code (T+1)^3} at order 2
+   */
+  public void addExpectedTransitions(double[] counts) {
+    int expected = order == 2 ? states * states * states : states * states;
+    if (counts.length != expected) {
+      throw new IllegalArgumentException("expected " + expected + " transition counts, got " + counts.length);
+    }
+    int n = lattice.size();
+    if (n == 0 || lastLogLikelihood == Double.NEGATIVE_INFINITY) {
+      return;
+    }
+    if (order == 2) {
+      addExpectedTrigrams(counts, n);
+    } else {
+      addExpectedBigrams(counts, n);
+    }
+  }
+
+  private void addExpectedBigrams(double[] counts, int n) {
+    for (int k = 0; k < count(0); k++) {
+      counts[boundary * states + tagAt(0, k)] += posterior(0, k);
+    }
+    for (int i = 0; i + 1 < n; i++) {
+      int here = stateStart[i];
+      int next = stateStart[i + 1];
+      int emit = lattice.pairOffset(i + 1);
+      int kk = count(i + 1);
+      // the unnormalised backward value at i is betaSum[i] * beta, so this makes the ξ of i sum to 1
+      double norm = 1.0 / (betaSum[i] * overlap(here, count(i)));
+      for (int j = 0; j < count(i); j++) {
+        double a = alpha[here + j] * norm;
+        int row = tagAt(i, j) * states;
+        for (int k = 0; k < kk; k++) {
+          int index = row + tagAt(i + 1, k);
+          counts[index] += a * bigram[index] * scaledEmission[emit + j * kk + k] * beta[next + k];
+        }
+      }
+    }
+    for (int k = 0; k < count(n - 1); k++) {
+      counts[tagAt(n - 1, k) * states + boundary] += posterior(n - 1, k);
+    }
+  }
+
+  private void addExpectedTrigrams(double[] counts, int n) {
+    for (int k = 0; k < count(0); k++) {
+      counts[(boundary * states + boundary) * states + tagAt(0, k)] += posterior(0, k);
+    }
+    for (int i = 0; i + 1 < n; i++) {
+      int kh = count(i - 1);
+      int kj = count(i);
+      int kk = count(i + 1);
+      int here = stateStart[i];
+      int next = stateStart[i + 1];
+      int emit = lattice.pairOffset(i + 1);
+      double norm = 1.0 / (betaSum[i] * overlap(here, kh * kj));
+      for (int h = 0; h < kh; h++) {
+        int th = tagAt(i - 1, h);
+        for (int j = 0; j < kj; j++) {
+          double a = alpha[here + h * kj + j] * norm;
+          int base = (th * states + tagAt(i, j)) * states;
+          for (int k = 0; k < kk; k++) {
+            int index = base + tagAt(i + 1, k);
+            counts[index] += a * trigram[index] * scaledEmission[emit + j * kk + k] * beta[next + j * kk + k];
+          }
+        }
+      }
+    }
+    int kj = count(n - 2);
+    int kk = count(n - 1);
+    int last = stateStart[n - 1];
+    double norm = 1.0 / overlap(last, kj * kk);
+    for (int j = 0; j < kj; j++) {
+      int base = (tagAt(n - 2, j) * states) * states;
+      for (int k = 0; k < kk; k++) {
+        int state = last + j * kk + k;
+        counts[base + tagAt(n - 1, k) * states + boundary] += alpha[state] * beta[state] * norm;
+      }
+    }
+  }
+
+  /** Sum of alpha * beta over {@code count} states: the normaliser of their scaled posteriors. */
+  private double overlap(int from, int count) {
+    double sum = 0;
+    for (int x = from; x < from + count; x++) {
+      sum += alpha[x] * beta[x];
+    }
+    return sum;
   }
 
   /** Stores exp(emission - max emission of the token), and the sum of the maxima for the likelihood. */
@@ -341,6 +452,7 @@ public final class Decoder {
         beta[here + j] = b;
         sum += b;
       }
+      betaSum[i] = sum;
       normalize(beta, here, count(i), sum);
     }
     for (int i = 0; i < n; i++) {
@@ -413,6 +525,7 @@ public final class Decoder {
           sum += b;
         }
       }
+      betaSum[i] = sum;
       normalize(beta, here, kh * kj, sum);
     }
     for (int i = 0; i < n; i++) {

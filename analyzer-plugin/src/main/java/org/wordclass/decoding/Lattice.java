@@ -196,6 +196,11 @@ public final class Lattice {
     return wordId[position] >= 0;
   }
 
+  /** Lexicon id of the token at {@code position}, or -1 if it is unknown. */
+  public int wordId(int position) {
+    return wordId[position];
+  }
+
   /** First index of the candidates of {@code position} in the flat candidate arrays. */
   int candidateOffset(int position) {
     return candidateStart[position];

@@ -96,6 +96,15 @@ public final class HmmModel {
   }
 
   /** Tables are stored as floats; rounding here makes a trained model equal its loaded copy. */
+  /**
+   * This model with other transition tables, lexicon and provenance, and everything else (tag
+   * set, states, cues, unknown-word model, order) kept: what re-estimation produces.
+   */
+  public HmmModel withParameters(double[] newLogBigram, double[] newLogTrigram, Lexicon newLexicon,
+      Map<String, String> newProvenance) {
+    return new HmmModel(order, tags, states, cues, newLogBigram, newLogTrigram, newLexicon, unknownWords, newProvenance);
+  }
+
   private static double[] toFloatPrecision(double[] values) {
     double[] out = new double[values.length];
     for (int i = 0; i < values.length; i++) {

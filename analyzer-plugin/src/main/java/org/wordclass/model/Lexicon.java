@@ -228,6 +228,14 @@ public final class Lexicon {
     return contextState.length;
   }
 
+  /**
+   * Position of the word's {@code k}-th tag among all {@link #pairCount()} word/tag pairs, for
+   * tools that keep one number per pair in a flat array (such as expected counts).
+   */
+  public int pairIndex(int word, int k) {
+    return tagStart[word] + k;
+  }
+
   /** Total number of word/tag pairs. */
   public int pairCount() {
     return tagIds.length;

@@ -54,7 +54,7 @@ public final class HmmEstimator {
     }
     StatePlan plan = new StatePlan(counts, finalId, tagCount, options.capitalisationStates());
     int n = plan.size() + 1;
-    long[] tri = new long[n * n * n];
+    double[] tri = new double[n * n * n];
     for (Map.Entry<Long, Long> e : counts.trigrams().entrySet()) {
       long key = e.getKey();
       int a = plan.stateOfKey((int) (key >>> 32));
@@ -62,7 +62,7 @@ public final class HmmEstimator {
       int c = plan.stateOfKey((int) (key & 0xFFFF));
       tri[(a * n + b) * n + c] += e.getValue();
     }
-    Transitions transitions = new Transitions(tri, n);
+    Transitions transitions = Transitions.ofTrigrams(tri, n, Transitions.Smoothing.DELETED_INTERPOLATION);
 
     Map<String, Map<Integer, Integer>> wordTags = counts.wordTags();
     long[] tagTokens = new long[tagCount];
@@ -93,10 +93,10 @@ public final class HmmEstimator {
     return (log + 1) / (log + 2);
   }
 
-  private List<Lexicon.Entry> lexiconEntries(TagCounts counts, StatePlan plan, long[] tri, int n) {
+  private List<Lexicon.Entry> lexiconEntries(TagCounts counts, StatePlan plan, double[] tri, int n) {
     long[] stateTokens = new long[plan.size()];
     counts.wordStates().values().forEach(states -> states.forEach((raw, count) -> stateTokens[plan.stateOf(raw)] += count));
-    long[] contextTokens = new long[n * n]; // c(previous state, state), from the trigram counts
+    double[] contextTokens = new double[n * n]; // c(previous state, state), from the trigram counts
     for (int a = 0; a < n; a++) {
       for (int bc = 0; bc < n * n; bc++) {
         contextTokens[bc] += tri[a * n * n + bc];
@@ -131,7 +131,7 @@ public final class HmmEstimator {
    * small at no measured cost in accuracy.
    */
   private static Lexicon.Entry withContexts(String word, int[] ids, float[] emissions, Map<Integer, Integer> contexts,
-      StatePlan plan, long[] contextTokens, int n, int minCount) {
+      StatePlan plan, double[] contextTokens, int n, int minCount) {
     List<TreeMap<Integer, Long>> perState = new ArrayList<>();
     for (int k = 0; k < ids.length; k++) {
       perState.add(new TreeMap<>());
@@ -153,7 +153,7 @@ public final class HmmEstimator {
       int j = 0;
       for (Map.Entry<Integer, Long> e : seen.entrySet()) {
         double lambda = contextWeight(e.getValue());
-        double own = (double) e.getValue() / contextTokens[e.getKey() * n + ids[k]];
+        double own = e.getValue() / contextTokens[e.getKey() * n + ids[k]];
         contextStates[k][j] = e.getKey();
         contextEmissions[k][j] = (float) Math.log(lambda * own + (1 - lambda) * Math.exp(emissions[k]));
         j++;

@@ -1,0 +1,123 @@
+package org.wordclass.adaptation;
+
+import java.util.LinkedHashMap;
+import java.util.Locale;
+import java.util.Map;
+import org.wordclass.training.Transitions;
+
+/**
+ * Everything that shapes an adaptation besides its inputs; every value goes into the adapted
+ * model's provenance.
+ *
+ * @param maxIterations re-estimation steps at most (each costs one pass over the text)
+ * @param minRelativeGain stop once an iteration raises the log-likelihood of the text by less
+ *     than this share of its magnitude; 0 runs every iteration
+ * @param newWeight λ: weight of the re-estimated parameters against the starting model's, {@code
+ *     p = λ p_new + (1 - λ) p_start}; 1 is plain Baum-Welch, 0 keeps the starting model
+ * @param lexiconConstraint known words keep to the tags the starting lexicon gives them; when
+ *     false, each known word may also take any open tag, starting from {@code relaxedFloor}
+ * @param relaxedFloor with the constraint off, a known word's emission for an open tag it lacks
+ *     starts as this fraction of the emission of a word seen once with that tag
+ * @param addWordsMinCount unknown words seen at least this often in the text join the lexicon
+ *     with their expected tag counts after the first pass; 0 adds none
+ * @param newPairMinShare a word/tag pair the starting lexicon lacks (an added word's, or one
+ *     opened by the relaxed constraint) is kept only if it carries at least this share of the
+ *     word's expected count
+ * @param smoothing how re-estimated transitions combine orders; maximum likelihood is exact EM
+ * @param threads worker threads for the expected counts; each has its own decoder and counts
+ * @param batchSentences sentences handed to a worker at a time
+ */
+public record AdaptationOptions(
+    int maxIterations,
+    double minRelativeGain,
+    double newWeight,
+    boolean lexiconConstraint,
+    double relaxedFloor,
+    int addWordsMinCount,
+    double newPairMinShare,
+    Transitions.Smoothing smoothing,
+    int threads,
+    int batchSentences) {
+
+  /**
+   * The safeguarded defaults: lexicon constraint, half-weight interpolation, at most 5
+   * iterations, and unknown words seen 3 times or more added (the one setting that raised
+   * accuracy in docs/adaptation.md).
+   */
+  public static final AdaptationOptions DEFAULTS = new AdaptationOptions(
+      5, 1e-4, 0.5, true, 0.1, 3, 0.1, Transitions.Smoothing.DELETED_INTERPOLATION,
+      Runtime.getRuntime().availableProcessors(), 256);
+
+  public AdaptationOptions {
+    if (maxIterations < 1) {
+      throw new IllegalArgumentException("at least one iteration is needed: " + maxIterations);
+    }
+    if (!(minRelativeGain >= 0)) {
+      throw new IllegalArgumentException("minimum relative gain must not be negative: " + minRelativeGain);
+    }
+    if (!(newWeight >= 0 && newWeight <= 1)) {
+      throw new IllegalArgumentException("weight of the new estimate must be in [0, 1]: " + newWeight);
+    }
+    if (!(relaxedFloor > 0 && relaxedFloor <= 1)) {
+      throw new IllegalArgumentException("relaxed emission floor must be in (0, 1]: " + relaxedFloor);
+    }
+    if (addWordsMinCount < 0) {
+      throw new IllegalArgumentException("minimum count of added words must not be negative: " + addWordsMinCount);
+    }
+    if (!(newPairMinShare >= 0 && newPairMinShare < 1)) {
+      throw new IllegalArgumentException("minimum share of a new word/tag pair must be in [0, 1): " + newPairMinShare);
+    }
+    if (threads < 1 || batchSentences < 1) {
+      throw new IllegalArgumentException("threads and batch size must be positive");
+    }
+  }
+
+  /** Plain Baum-Welch (exact EM): the new estimate alone, maximum-likelihood transitions, no words added, all iterations. */
+  public static AdaptationOptions plainBaumWelch(int iterations) {
+    return DEFAULTS.withIterations(iterations, 0).withNewWeight(1).withAddedWords(0).withSmoothing(Transitions.Smoothing.MAXIMUM_LIKELIHOOD);
+  }
+
+  public AdaptationOptions withIterations(int max, double minGain) {
+    return new AdaptationOptions(max, minGain, newWeight, lexiconConstraint, relaxedFloor, addWordsMinCount,
+        newPairMinShare, smoothing, threads, batchSentences);
+  }
+
+  public AdaptationOptions withNewWeight(double weight) {
+    return new AdaptationOptions(maxIterations, minRelativeGain, weight, lexiconConstraint, relaxedFloor,
+        addWordsMinCount, newPairMinShare, smoothing, threads, batchSentences);
+  }
+
+  public AdaptationOptions withLexiconConstraint(boolean constraint) {
+    return new AdaptationOptions(maxIterations, minRelativeGain, newWeight, constraint, relaxedFloor,
+        addWordsMinCount, newPairMinShare, smoothing, threads, batchSentences);
+  }
+
+  public AdaptationOptions withAddedWords(int minCount) {
+    return new AdaptationOptions(maxIterations, minRelativeGain, newWeight, lexiconConstraint, relaxedFloor,
+        minCount, newPairMinShare, smoothing, threads, batchSentences);
+  }
+
+  public AdaptationOptions withSmoothing(Transitions.Smoothing newSmoothing) {
+    return new AdaptationOptions(maxIterations, minRelativeGain, newWeight, lexiconConstraint, relaxedFloor,
+        addWordsMinCount, newPairMinShare, newSmoothing, threads, batchSentences);
+  }
+
+  public AdaptationOptions withThreads(int count) {
+    return new AdaptationOptions(maxIterations, minRelativeGain, newWeight, lexiconConstraint, relaxedFloor,
+        addWordsMinCount, newPairMinShare, smoothing, count, batchSentences);
+  }
+
+  /** The options as provenance entries. */
+  public Map<String, String> describe() {
+    Map<String, String> m = new LinkedHashMap<>();
+    m.put("adapt.option.maxIterations", Integer.toString(maxIterations));
+    m.put("adapt.option.minRelativeGain", Double.toString(minRelativeGain));
+    m.put("adapt.option.newWeight", Double.toString(newWeight));
+    m.put("adapt.option.lexiconConstraint", Boolean.toString(lexiconConstraint));
+    m.put("adapt.option.relaxedFloor", Double.toString(relaxedFloor));
+    m.put("adapt.option.addWordsMinCount", Integer.toString(addWordsMinCount));
+    m.put("adapt.option.newPairMinShare", Double.toString(newPairMinShare));
+    m.put("adapt.option.smoothing", smoothing.name().toLowerCase(Locale.ROOT).replace('_', '-'));
+    return m;
+  }
+}
