@@ -36,11 +36,7 @@ final class DemoSolr implements Closeable {
 
   /** Starts a node in the empty folder {@code home}. */
   static DemoSolr start(Path home) throws IOException {
-    Files.writeString(home.resolve("solr.xml"), "<solr/>\n", StandardCharsets.UTF_8);
-    Path instance = home.resolve(CORE);
-    ExampleFiles.copyTree(ExampleFiles.solrConfigSet(), instance);
-    ExampleFiles.copyBundledModel(instance.resolve("conf").resolve(MODEL_IN_CONF));
-    Files.writeString(instance.resolve("core.properties"), "name=" + CORE + "\n", StandardCharsets.UTF_8);
+    writeHome(home, true);
     CoreContainer container = CoreContainer.createAndLoad(home);
     if (container.getCoreInitFailures().containsKey(CORE)) {
       Exception failure = container.getCoreInitFailures().get(CORE).exception;
@@ -48,6 +44,26 @@ final class DemoSolr implements Closeable {
       throw new IOException("the demo core did not start", failure);
     }
     return new DemoSolr(home, container);
+  }
+
+  /** Lays out the Solr home; {@code withModel} false forgets the user's step of copying the model. */
+  static void writeHome(Path home, boolean withModel) throws IOException {
+    Files.writeString(home.resolve("solr.xml"), "<solr/>\n", StandardCharsets.UTF_8);
+    Path instance = home.resolve(CORE);
+    ExampleFiles.copyTree(ExampleFiles.solrConfigSet(), instance);
+    if (withModel) {
+      ExampleFiles.copyBundledModel(instance.resolve("conf").resolve(MODEL_IN_CONF));
+    }
+    Files.writeString(instance.resolve("core.properties"), "name=" + CORE + "\n", StandardCharsets.UTF_8);
+  }
+
+  /** The messages of {@code failure} and all its causes, one a line. */
+  static String causes(Throwable failure) {
+    StringBuilder out = new StringBuilder();
+    for (Throwable t = failure; t != null; t = t.getCause()) {
+      out.append(t.getMessage()).append('\n');
+    }
+    return out.toString();
   }
 
   /** The model the word-class filter of {@code fieldType} decodes with, in the current core. */
