@@ -1,13 +1,12 @@
 package org.wordclass.cli;
 
-import java.util.ArrayList;
-import java.util.List;
 import java.util.Map;
 import java.util.function.Consumer;
 import org.apache.lucene.analysis.Analyzer;
 import org.wordclass.corpus.AnalysisChain;
 import org.wordclass.corpus.AnalyzerAlignment;
 import org.wordclass.corpus.Sentence;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
 
 /**
@@ -21,30 +20,20 @@ final class AnalyzerOptions {
           + "instead of the treebank's own tokens.")
   boolean enabled;
 
-  @Option(names = "--tokenizer", paramLabel = "NAME[:key=value,...]", defaultValue = "standard",
-      description = "Tokenizer of the chain, by its Lucene SPI name with arguments. Default: ${DEFAULT-VALUE}.")
-  String tokenizer;
-
-  @Option(names = "--filter", paramLabel = "NAME[:key=value,...]",
-      description = "A token filter that comes before the word-class filter, by its Lucene SPI name with arguments; "
-          + "repeat for more, in chain order (for example --filter lowercase).")
-  List<String> filters = new ArrayList<>();
+  @Mixin
+  ChainOptions chainOptions;
 
   @Option(names = "--skip-bad-sentences",
       description = "Skip, and count, sentences without raw text or whose text does not match their words, "
           + "instead of stopping at the first.")
   boolean skipBadSentences;
 
-  private AnalysisChain chain;
   private Analyzer analyzer;
   private AnalyzerAlignment alignment;
 
   /** The chain named by the options. */
   AnalysisChain chain() {
-    if (chain == null) {
-      chain = AnalysisChain.of(tokenizer, filters);
-    }
-    return chain;
+    return chainOptions.chain();
   }
 
   /** {@code action} on each sentence as the options want it: as it is, or as aligned analyzer tokens. */

@@ -36,7 +36,8 @@ public final class WordclassCommand implements Callable<Integer> {
         new EvaluateCommand(),
         new CrossValidateCommand(),
         new InspectCommand(),
-        new TagCommand());
+        new TagCommand(),
+        new AdaptCommand());
   }
 
   /** A command line ready to execute, with the error handling and defaults of every subcommand. */
