@@ -35,6 +35,7 @@ public final class WordclassCommand implements Callable<Integer> {
         new TrainCommand(),
         new EvaluateCommand(),
         new CrossValidateCommand(),
+        new LearningCurveCommand(),
         new InspectCommand(),
         new TagCommand(),
         new AdaptCommand());
