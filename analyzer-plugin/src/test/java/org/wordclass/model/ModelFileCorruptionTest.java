@@ -52,6 +52,7 @@ class ModelFileCorruptionTest {
       }
     }
     assertEquals(small.length * 255, checked);
+    System.out.println("small model (" + small.length + " bytes): " + checked + " single-byte changes refused");
   }
 
   @Test
@@ -62,6 +63,7 @@ class ModelFileCorruptionTest {
       int mask = 1 + rnd.nextInt(255);
       assertRefused(flip(bundled, offset, mask), "bundled offset " + offset + " xor " + mask);
     }
+    System.out.println("bundled model: " + BUNDLED_OFFSETS + " sampled single-byte changes refused");
   }
 
   @Test
