@@ -60,7 +60,7 @@ public final class AtomicFiles {
     }
   }
 
-  /** Deletes the temporary files of {@code name} in {@code dir} that were abandoned by killed writers. */
+  /** Deletes, where allowed, the temporary files of {@code name} in {@code dir} that killed writers abandoned. */
   static void removeStaleTemporaryFiles(Path dir, String name) throws IOException {
     Pattern own = Pattern.compile(Pattern.quote(name) + "\\d+\\.tmp");
     FileTime staleBefore = FileTime.from(Instant.now().minus(STALE_AFTER));
@@ -71,7 +71,11 @@ public final class AtomicFiles {
           .toList();
     }
     for (Path f : stale) {
-      Files.deleteIfExists(f);
+      try {
+        Files.deleteIfExists(f);
+      } catch (IOException e) {
+        // clean-up is a courtesy: a file we may not delete must not stop the write
+      }
     }
   }
 
