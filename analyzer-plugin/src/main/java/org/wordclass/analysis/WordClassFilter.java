@@ -102,6 +102,8 @@ public final class WordClassFilter extends TokenFilter {
   private boolean carried;
   private boolean exhausted;
   private boolean qualifiedPending;
+  /** Whether the pool was checked against the attributes since the last reset. */
+  private boolean poolChecked;
 
   /** Tags with {@code model} using the defaults of {@link WordClassOptions#of}. */
   public WordClassFilter(TokenStream input, HmmModel model) {
@@ -136,6 +138,11 @@ public final class WordClassFilter extends TokenFilter {
 
   /** Buffers and decodes the next window; false when the input has no more tokens. */
   private boolean fillWindow() throws IOException {
+    if (!poolChecked) {
+      // consumers may add attributes after reset(), as Lucene's indexing chain does
+      dropPoolIfAttributesChanged();
+      poolChecked = true;
+    }
     int size = 0;
     if (carried) {
       swapSlots(0, windowSize);
@@ -234,8 +241,8 @@ public final class WordClassFilter extends TokenFilter {
     carried = false;
     exhausted = false;
     qualifiedPending = false;
+    poolChecked = false;
     lattice.clear();
-    dropPoolIfAttributesChanged();
   }
 
   /** Pooled slots are clones of this stream's attributes; a consumer may have added some since. */

@@ -1,6 +1,5 @@
 package org.wordclass.model;
 
-import java.io.EOFException;
 import java.io.IOException;
 import java.io.InputStream;
 import java.io.UncheckedIOException;
@@ -197,7 +196,10 @@ public final class ModelFile {
       HmmModel model = readBody(in, version, name);
       CodecUtil.checkFooter(in);
       return model;
-    } catch (CorruptIndexException | EOFException | IllegalArgumentException | IndexOutOfBoundsException e) {
+    } catch (ModelFormatException e) {
+      throw e;
+    } catch (IOException | IllegalArgumentException | IndexOutOfBoundsException e) {
+      // the bytes are in memory: every I/O error here (end of input, a malformed vInt) is the content's
       throw new ModelFormatException(name + ": the model file is inconsistent: " + e.getMessage(), e);
     }
   }

@@ -2,26 +2,40 @@ package org.wordclass.analysis;
 
 import java.io.IOException;
 import java.io.Reader;
+import java.lang.management.ManagementFactory;
+import java.lang.management.MemoryPoolMXBean;
+import java.lang.management.MemoryType;
+import java.util.HashMap;
+import java.util.Map;
 import org.apache.lucene.analysis.TokenStream;
 import org.apache.lucene.analysis.Tokenizer;
 import org.apache.lucene.analysis.core.WhitespaceTokenizer;
+import org.apache.lucene.analysis.standard.StandardTokenizer;
 import org.wordclass.model.DefaultModel;
 
 /**
- * Streams a generated field of many tokens through a tokenizer and {@link WordClassFilter} and
- * prints how many tokens came out: run in a JVM with a small heap, it shows that memory does not
- * grow with the field. Arguments: token count, then optionally the maximum window.
+ * Streams a generated field through a tokenizer and {@link WordClassFilter} and prints how many
+ * tokens came out, the time and the heap: run in a JVM with a small heap, it shows that memory
+ * does not grow with the field. Arguments, as {@code name=value}: {@code tokens} (a number of
+ * words) or {@code chars} (a number of characters), {@code window} (the maximum window) and
+ * {@code tokenizer} ({@code whitespace}, the default, or {@code standard}).
  */
 public final class LargeFieldMain {
   private LargeFieldMain() {}
 
   public static void main(String[] args) throws IOException {
-    long tokens = Long.parseLong(args[0]);
-    int maxWindow = args.length > 1 ? Integer.parseInt(args[1]) : WordClassOptions.DEFAULT_MAX_WINDOW;
+    Map<String, String> named = new HashMap<>();
+    for (String arg : args) {
+      named.put(arg.substring(0, arg.indexOf('=')), arg.substring(arg.indexOf('=') + 1));
+    }
+    long tokens = Long.parseLong(named.getOrDefault("tokens", Long.toString(Long.MAX_VALUE)));
+    long chars = Long.parseLong(named.getOrDefault("chars", Long.toString(Long.MAX_VALUE)));
+    int maxWindow = Integer.parseInt(named.getOrDefault("window", Integer.toString(WordClassOptions.DEFAULT_MAX_WINDOW)));
     WordClassOptions options = WordClassOptions.of(DefaultModel.get()).withMaxWindow(maxWindow);
     long start = System.nanoTime();
-    Tokenizer tokenizer = new WhitespaceTokenizer();
-    tokenizer.setReader(new GeneratedText(tokens));
+    Tokenizer tokenizer = "standard".equals(named.get("tokenizer")) ? new StandardTokenizer() : new WhitespaceTokenizer();
+    GeneratedText text = new GeneratedText(tokens, chars);
+    tokenizer.setReader(text);
     long count = 0;
     try (TokenStream stream = new WordClassFilter(tokenizer, options)) {
       stream.reset();
@@ -31,10 +45,25 @@ public final class LargeFieldMain {
       stream.end();
     }
     long millis = (System.nanoTime() - start) / 1_000_000;
-    System.out.println("tokens=" + count + " millis=" + millis + " maxWindow=" + maxWindow);
+    System.out.println("tokens=" + count + " chars=" + text.charsRead + " millis=" + millis + " maxWindow=" + maxWindow
+        + " maxHeapMB=" + Runtime.getRuntime().maxMemory() / (1 << 20) + " peakHeapMB=" + peakHeapMegabytes());
   }
 
-  /** Exactly {@code tokens} space-separated words from invented sentences, made as they are read. */
+  /** Highest heap use seen by the collector's pools, in MiB. */
+  private static long peakHeapMegabytes() {
+    long peak = 0;
+    for (MemoryPoolMXBean pool : ManagementFactory.getMemoryPoolMXBeans()) {
+      if (pool.getType() == MemoryType.HEAP) {
+        peak += pool.getPeakUsage().getUsed();
+      }
+    }
+    return peak / (1 << 20);
+  }
+
+  /**
+   * Space-separated words from invented sentences, made as they are read: exactly {@code tokens}
+   * words, or exactly {@code chars} characters (the last word cut), whichever comes first.
+   */
   static final class GeneratedText extends Reader {
     private static final String[][] SENTENCES = {
       "The club meets every Tuesday in the old bakery .".split(" "),
@@ -46,18 +75,22 @@ public final class LargeFieldMain {
     };
 
     private long remaining;
+    private long charsLeft;
+    long charsRead;
     private long sentence;
     private int word;
     private String pending = "";
     private int pendingAt;
 
-    GeneratedText(long tokens) {
+    GeneratedText(long tokens, long chars) {
       this.remaining = tokens;
+      this.charsLeft = chars;
     }
 
     @Override
     public int read(char[] buf, int off, int len) {
       int written = 0;
+      len = (int) Math.min(len, charsLeft);
       while (written < len) {
         if (pendingAt == pending.length() && !nextWord()) {
           break;
@@ -67,6 +100,8 @@ public final class LargeFieldMain {
         pendingAt += n;
         written += n;
       }
+      charsLeft -= written;
+      charsRead += written;
       return written == 0 ? -1 : written;
     }
 

@@ -22,6 +22,10 @@ class ModelFileCorruptionTest {
   private static final int BUNDLED_OFFSETS = 2_000;
   /** Lengths the bundled model is cut to, besides a few chosen ones. */
   private static final int BUNDLED_TRUNCATIONS = 300;
+  /** Every this many lengths the bundled model is also cut to. */
+  private static final int TRUNCATION_STRIDE = 97;
+  /** Bytes at each end of the bundled model within which every length is tried. */
+  private static final int TRUNCATION_EDGE = 2048;
 
   private static byte[] small;
   private static byte[] bundled;
@@ -48,6 +52,7 @@ class ModelFileCorruptionTest {
       }
     }
     assertEquals(small.length * 255, checked);
+    System.out.println("small model (" + small.length + " bytes): " + checked + " single-byte changes refused");
   }
 
   @Test
@@ -58,6 +63,7 @@ class ModelFileCorruptionTest {
       int mask = 1 + rnd.nextInt(255);
       assertRefused(flip(bundled, offset, mask), "bundled offset " + offset + " xor " + mask);
     }
+    System.out.println("bundled model: " + BUNDLED_OFFSETS + " sampled single-byte changes refused");
   }
 
   @Test
@@ -78,6 +84,37 @@ class ModelFileCorruptionTest {
       int length = rnd.nextInt(n);
       assertRefused(Arrays.copyOf(bundled, length), "bundled cut to " + length + " bytes");
     }
+  }
+
+  /**
+   * A dense sample of the bundled model's lengths: every {@value #TRUNCATION_STRIDE}th, and every
+   * length within {@value #TRUNCATION_EDGE} bytes of either end, where header and footer lie.
+   * Each attempt costs one checksum pass over what is left, so every length (over 600,000) would
+   * take about five minutes; this sample takes about five seconds.
+   */
+  @Test
+  void denseTruncationsOfTheBundledModelAreDetected() {
+    int n = bundled.length;
+    long start = System.nanoTime();
+    int count = 0;
+    for (int length = 0; length < n; length++) {
+      if (length % TRUNCATION_STRIDE == 0 || length < TRUNCATION_EDGE || length >= n - TRUNCATION_EDGE) {
+        assertRefused(Arrays.copyOf(bundled, length), "bundled cut to " + length + " bytes");
+        count++;
+      }
+    }
+    System.out.printf(java.util.Locale.ROOT, "bundled model (%d bytes): %d truncated lengths refused in %.1f s%n",
+        n, count, (System.nanoTime() - start) / 1e9);
+    assertEquals(truncationCount(n), count);
+  }
+
+  /** How many lengths {@link #denseTruncationsOfTheBundledModelAreDetected} tries, counted independently. */
+  private static int truncationCount(int n) {
+    int strided = (n - 1) / TRUNCATION_STRIDE + 1;
+    int inEdges = 2 * TRUNCATION_EDGE;
+    int stridedInEdges = (TRUNCATION_EDGE - 1) / TRUNCATION_STRIDE + 1
+        + (int) java.util.stream.IntStream.range(n - TRUNCATION_EDGE, n).filter(l -> l % TRUNCATION_STRIDE == 0).count();
+    return strided + inEdges - stridedInEdges;
   }
 
   @Test

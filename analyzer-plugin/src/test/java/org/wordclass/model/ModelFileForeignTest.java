@@ -146,6 +146,34 @@ class ModelFileForeignTest {
     assertMessage(bytes, "the model file is inconsistent");
   }
 
+  /** Found by ModelFileFuzzTest: Lucene reports a vInt of more than 32 bits with a plain IOException. */
+  @Test
+  void malformedVIntIsRefusedAsAFormatError() {
+    byte[] bytes = crafted(out -> out.writeBytes(new byte[] {(byte) 0xFF, (byte) 0xFF, (byte) 0xFF, (byte) 0xFF, (byte) 0x7F}, 5));
+    assertMessage(bytes, "the model file is inconsistent: Invalid vInt detected");
+  }
+
+  @Test
+  void hugeSuffixTrieIsRefusedBeforeAllocating() {
+    byte[] bytes = crafted(out -> {
+      writeTwoTagPrefix(out);
+      out.writeVInt(0); // lexicon words
+      out.writeLong(Double.doubleToLongBits(1.0)); // theta
+      out.writeVInt(4); // longest ending
+      out.writeVInt(1); // one open tag
+      out.writeVInt(0); // tag A
+      out.writeLong(0);
+      out.writeLong(0); // priors
+      out.writeLong(Double.doubleToLongBits(1.0)); // base distribution
+      for (int i = 0; i < WordShape.values().length; i++) {
+        out.writeVInt(0);
+      }
+      out.writeVInt(1); // one trie
+      out.writeVInt(Integer.MAX_VALUE); // its nodes
+    });
+    assertFastRefusal(bytes, "declares 2147483647 suffix nodes but only ");
+  }
+
   @Test
   void tagIndexOutOfRangeIsRefused() {
     byte[] bytes = crafted(out -> {

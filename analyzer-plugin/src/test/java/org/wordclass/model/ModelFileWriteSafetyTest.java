@@ -2,6 +2,7 @@ package org.wordclass.model;
 
 import static org.junit.jupiter.api.Assertions.assertArrayEquals;
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 import static org.junit.jupiter.api.Assumptions.assumeFalse;
@@ -9,7 +10,9 @@ import static org.junit.jupiter.api.Assumptions.assumeFalse;
 import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.nio.file.attribute.FileTime;
 import java.nio.file.attribute.PosixFilePermissions;
+import java.time.Instant;
 import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
@@ -92,6 +95,24 @@ class ModelFileWriteSafetyTest {
     assertThrows(NullPointerException.class, () -> ModelFile.write(modelWhoseWriteFails(), target));
     ModelFileRoundTripTest.assertSameModel(TestModels.small(), ModelFile.read(target));
     assertTrue(Files.isRegularFile(target));
+  }
+
+  /**
+   * What a writer killed by SIGKILL leaves (see InterruptedTrainTest in the model builder): its
+   * temporary file. The next write to the same target removes it once stale, and keeps a fresh
+   * one (a concurrent writer's) and those of other targets.
+   */
+  @Test
+  void nextWriteRemovesStaleTemporaryFilesOfItsOwnTargetOnly() throws IOException {
+    FileTime old = FileTime.from(Instant.now().minus(AtomicFiles.STALE_AFTER).minusSeconds(60));
+    Path stale = Files.setLastModifiedTime(Files.write(dir.resolve("model.wcm8812734.tmp"), new byte[] {1}), old);
+    Path fresh = Files.write(dir.resolve("model.wcm5521.tmp"), new byte[] {2});
+    Path otherTarget = Files.setLastModifiedTime(Files.write(dir.resolve("other.wcm77.tmp"), new byte[] {3}), old);
+    Path notATemporary = Files.setLastModifiedTime(Files.write(dir.resolve("model.wcm.tmp"), new byte[] {4}), old);
+    ModelFile.write(TestModels.random(new java.util.Random(5L), 1), target);
+    assertFalse(Files.exists(stale));
+    assertEquals(List.of("model.wcm", "model.wcm.tmp", "model.wcm5521.tmp", "other.wcm77.tmp"), fileNames(dir));
+    assertTrue(Files.exists(fresh) && Files.exists(otherTarget) && Files.exists(notATemporary));
   }
 
   private static List<String> fileNames(Path folder) throws IOException {
