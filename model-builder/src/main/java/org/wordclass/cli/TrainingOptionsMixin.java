@@ -73,7 +73,8 @@ final class TrainingOptionsMixin {
   @Option(names = "--latent-rounds", paramLabel = "N",
       description = "Rounds of split-merge training: each splits every hidden state of a class in two, fits "
           + "the halves to the tagged corpus by EM and merges back the splits that help least; 0 for none. "
-          + "Slower decoding and a larger model. Default: ${DEFAULT-VALUE}.")
+          + "Context-dependent emissions are then left out. Slower decoding and a larger model; best with "
+          + "--order 1 (see docs/latent-states.md). Default: ${DEFAULT-VALUE}.")
   int latentRounds;
 
   /** The options given; a value the estimator refuses is reported as a usage error. */

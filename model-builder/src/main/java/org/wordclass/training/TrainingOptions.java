@@ -28,7 +28,8 @@ import java.util.Map;
  *     that context was seen at least this often
  * @param latentRounds rounds of split-merge training: each splits every hidden state in two,
  *     fits the halves to the tagged corpus by EM and merges back the splits that help least (see
- *     {@code LatentStates}); 0 keeps the states of the supervised model
+ *     {@code LatentStates}); 0 keeps the states of the supervised model. A model with latent
+ *     states has no context-dependent emissions, whatever {@code contextEmissions} says
  */
 public record TrainingOptions(
     int order,
