@@ -272,6 +272,31 @@ public final class Decoder {
   }
 
   /**
+   * After {@link #forwardBackward} at order 1: the forward weight of the {@code k}-th candidate
+   * of {@code position} (the probability of the tokens up to and including it, ending in that
+   * candidate) and, below, its backward weight (of the tokens after it, given that candidate).
+   * Each is scaled by a factor shared by all candidates of the position, so their product is
+   * proportional to the posterior. Split-merge training reads them to estimate what merging two
+   * states would cost without decoding again.
+   */
+  public double scaledForward(int position, int k) {
+    requireFirstOrder();
+    return alpha[stateStart[position] + k];
+  }
+
+  /** The backward weight of a candidate; see {@link #scaledForward}. */
+  public double scaledBackward(int position, int k) {
+    requireFirstOrder();
+    return beta[stateStart[position] + k];
+  }
+
+  private void requireFirstOrder() {
+    if (order != 1) {
+      throw new IllegalStateException("forward and backward weights per candidate exist at order 1 only");
+    }
+  }
+
+  /**
    * Posterior probability that token {@code position} has the tag of its {@code k}-th
    * candidate: the sum over all its candidate states of that tag.
    */

@@ -57,12 +57,26 @@ public final class Lattice {
 
   /** Appends the token {@code buf[off..off+len)}. */
   public void add(char[] buf, int off, int len) {
+    add(buf, off, len, -1);
+  }
+
+  /**
+   * Appends the token {@code buf[off..off+len)} with only the states of {@code tag} as
+   * candidates (all its states when {@code tag} is negative): a tagged token whose hidden state
+   * within its tag is unknown, as in training with latent sub-states.
+   *
+   * @throws IllegalArgumentException if the model lets the token take no state of {@code tag}
+   */
+  public void add(char[] buf, int off, int len, int tag) {
     ensureTokenCapacity(size + 1);
     int flags = splitsByCapital && size > 0 && startsWithCapital(buf, off, len) ? StateSpace.CAPITALISED : 0;
     int word = lookup(buf, off, len);
     wordId[size] = word;
     int start = candidateStart[size];
-    int end = word >= 0 ? addKnown(word, flags, start) : addUnknown(buf, off, len, flags, start);
+    int end = word >= 0 ? addKnown(word, flags, tag, start) : addUnknown(buf, off, len, flags, tag, start);
+    if (end == start) {
+      throw new IllegalArgumentException("'" + new String(buf, off, len) + "' cannot take tag " + model.tags().name(tag));
+    }
     candidateStart[size + 1] = end;
     size++;
     fillPairEmissions(size - 1);
@@ -71,6 +85,16 @@ public final class Lattice {
   /** Appends a token given as a String. */
   public void add(String token) {
     add(token.toCharArray(), 0, token.length());
+  }
+
+  /** Appends a token given as a String, restricted to the states of {@code tag}. */
+  public void add(String token, int tag) {
+    add(token.toCharArray(), 0, token.length(), tag);
+  }
+
+  /** Whether {@code state} may be a candidate: of the wanted tag, and written as the token is unless {@code anyCase}. */
+  private boolean admits(int state, int tag, int flags, boolean anyCase) {
+    return (tag < 0 || states.tagOf(state) == tag) && (anyCase || !splitsByCapital || states.flags(state) == flags);
   }
 
   private static boolean startsWithCapital(char[] buf, int off, int len) {
@@ -93,7 +117,7 @@ public final class Lattice {
     return word;
   }
 
-  private int addKnown(int word, int flags, int start) {
+  private int addKnown(int word, int flags, int tag, int start) {
     Lexicon lexicon = model.lexicon();
     int n = lexicon.tagCount(word);
     ensureCandidateCapacity(start + n);
@@ -102,7 +126,7 @@ public final class Lattice {
       // first pass: states that match how the token is written; if none do, all of them
       for (int k = 0; k < n; k++) {
         int state = lexicon.tag(word, k);
-        if (pass == 1 || !splitsByCapital || states.flags(state) == flags) {
+        if (admits(state, tag, flags, pass == 1)) {
           candidateState[end] = state;
           candidateLogEmission[end] = lexicon.logEmission(word, k);
           candidateEntry[end] = k;
@@ -113,14 +137,14 @@ public final class Lattice {
     return end;
   }
 
-  private int addUnknown(char[] buf, int off, int len, int flags, int start) {
+  private int addUnknown(char[] buf, int off, int len, int flags, int tag, int start) {
     UnknownWordModel unknown = model.unknownWords();
     unknown.logEmissions(buf, off, len, unknownScratch, unknownScores);
     int end = start;
     for (int pass = 0; pass < 2 && end == start; pass++) {
       for (int k = 0; k < unknown.openTagCount(); k++) {
         for (int state : states.statesOf(unknown.openTag(k))) {
-          if (pass == 1 || !splitsByCapital || states.flags(state) == flags) {
+          if (admits(state, tag, flags, pass == 1)) {
             ensureCandidateCapacity(end + 1);
             candidateState[end] = state;
             candidateLogEmission[end] = unknownScores[k];

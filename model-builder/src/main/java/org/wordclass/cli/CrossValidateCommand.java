@@ -79,7 +79,7 @@ final class CrossValidateCommand extends BaseCommand {
   }
 
   private FoldResult runFold(int fold, Corpus input, TrainingOptions options, Progress progress) {
-    TagCounts counts = new TagCounts();
+    TagCounts counts = TagCounts.forOptions(options);
     long[] seen = new long[1];
     progress.read(input, inFold(fold, false, s -> counts.add(s.words(), s.tags()), seen));
     if (seen[0] < folds) {

@@ -40,7 +40,7 @@ final class TrainCommand extends BaseCommand {
     TrainingOptions options = training.toOptions();
     Corpus input = corpus.open(TagColumn.UPOS);
     Progress progress = Progress.start("train", input, 1, err());
-    TagCounts counts = new TagCounts();
+    TagCounts counts = TagCounts.forOptions(options);
     try {
       progress.read(input, analysis.feeding(s -> counts.add(s.words(), s.tags())));
     } finally {

@@ -70,12 +70,19 @@ final class TrainingOptionsMixin {
           + "Default: ${DEFAULT-VALUE}.")
   int contextMinCount;
 
+  @Option(names = "--latent-rounds", paramLabel = "N",
+      description = "Rounds of split-merge training: each splits every hidden state of a class in two, fits "
+          + "the halves to the tagged corpus by EM and merges back the splits that help least; 0 for none. "
+          + "Context-dependent emissions are then left out. Slower decoding and a larger model; best with "
+          + "--order 1 (see docs/latent-states.md). Default: ${DEFAULT-VALUE}.")
+  int latentRounds;
+
   /** The options given; a value the estimator refuses is reported as a usage error. */
   TrainingOptions toOptions() {
     try {
       TrainingOptions options = new TrainingOptions(order, maxSuffixLength, rareWordMaxCount,
           TrainingOptions.SuffixWeightRule.HELD_OUT, Double.NaN, openClassMinShare, shapeClasses,
-          capitalisationStates, contextEmissions, lowercaseFirstWord, contextMinCount);
+          capitalisationStates, contextEmissions, lowercaseFirstWord, contextMinCount, latentRounds);
       return withSuffixWeight(options, suffixWeight);
     } catch (IllegalArgumentException e) {
       throw new ParameterException(mixee.commandLine(), "Invalid training option: " + e.getMessage());

@@ -26,7 +26,9 @@ import org.wordclass.model.WordShape;
  *       conditioned on the previous state (Thede and Harper 1999), smoothed back to {@code P(w|s)};
  *   <li>states: one per tag, or, where enabled, tags split by whether the word was written with
  *       a capital in mid-sentence (Brants 2000);
- *   <li>unknown words: see {@link UnknownWordModel}.
+ *   <li>unknown words: see {@link UnknownWordModel};
+ *   <li>where enabled, latent sub-states of every state, fitted by split-merge training (see
+ *       {@link LatentStates}).
  * </ul>
  *
  * Deterministic: the same counts and options give the same model, bit for bit.
@@ -79,8 +81,17 @@ public final class HmmEstimator {
     all.put("smoothing.trigramWeights", transitions.describeTrigramWeights());
     all.put("smoothing.bigramWeights", transitions.describeBigramWeights());
     all.put("smoothing.suffixWeight", Double.toString(unknown.theta()));
-    return new HmmModel(options.order(), tagSet, plan.space(), cues, transitions.logBigram(), transitions.logTrigram(),
-        new Lexicon(entries), unknown, all);
+    HmmModel model = new HmmModel(options.order(), tagSet, plan.space(), cues, transitions.logBigram(),
+        transitions.logTrigram(), new Lexicon(entries), unknown, all);
+    return options.latentRounds() == 0 ? model : withLatentStates(model, counts);
+  }
+
+  /** The model refined by split-merge training on the counted sentences. */
+  private HmmModel withLatentStates(HmmModel model, TagCounts counts) {
+    if (counts.keptSentences() == null) {
+      throw new IllegalArgumentException("latent states are trained on the sentences: count them with TagCounts.forOptions");
+    }
+    return new LatentStates(LatentStates.Settings.DEFAULT, counts.keptSentences()).train(model, options.latentRounds()).model();
   }
 
   /**

@@ -15,8 +15,15 @@ import java.util.Map;
  * <p>Counts are kept per raw state: a tag together with whether the word was written with a
  * capital in mid-sentence, so that {@link HmmEstimator} can choose to split tags by that cue or
  * not. Tags get provisional ids in order of first appearance; the estimator sorts them.
+ *
+ * <p>Latent sub-states are fitted to the sentences themselves, not to counts, so counts made for
+ * such options ({@link #forOptions}) also keep the sentences; memory then grows with the corpus.
  */
 public final class TagCounts {
+  /** One tagged sentence, kept for training that needs more than counts. */
+  public record TaggedSentence(List<String> words, List<String> tags) {}
+
+  private final List<TaggedSentence> kept;
   private final Map<String, Integer> tagIds = new HashMap<>();
   private final List<String> tagNames = new ArrayList<>();
   private final Map<String, Map<Integer, Integer>> wordStates = new HashMap<>();
@@ -24,6 +31,20 @@ public final class TagCounts {
   private final Map<Long, Long> trigrams = new HashMap<>();
   private long sentences;
   private long tokens;
+
+  /** Counts that keep no sentence. */
+  public TagCounts() {
+    this(false);
+  }
+
+  private TagCounts(boolean keepSentences) {
+    this.kept = keepSentences ? new ArrayList<>() : null;
+  }
+
+  /** Counts for training with {@code options}: they keep the sentences if latent sub-states need them. */
+  public static TagCounts forOptions(TrainingOptions options) {
+    return new TagCounts(options.latentRounds() > 0);
+  }
 
   /** Counts one tagged sentence; empty sentences are ignored. */
   public void add(List<String> words, List<String> tags) {
@@ -34,6 +55,9 @@ public final class TagCounts {
       return;
     }
     sentences++;
+    if (kept != null) {
+      kept.add(new TaggedSentence(List.copyOf(words), List.copyOf(tags)));
+    }
     int a = 0;
     int b = 0;
     for (int i = 0; i < words.size(); i++) {
@@ -91,6 +115,11 @@ public final class TagCounts {
 
   public long tokens() {
     return tokens;
+  }
+
+  /** The sentences counted, or null if they were not kept. */
+  List<TaggedSentence> keptSentences() {
+    return kept;
   }
 
   List<String> tagNames() {

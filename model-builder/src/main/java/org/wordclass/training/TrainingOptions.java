@@ -26,6 +26,10 @@ import java.util.Map;
  * @param lowercaseFirstWord look an unknown capitalised sentence-initial word up in lower case
  * @param contextMinCount a word's emission after a particular previous state is kept only if
  *     that context was seen at least this often
+ * @param latentRounds rounds of split-merge training: each splits every hidden state in two,
+ *     fits the halves to the tagged corpus by EM and merges back the splits that help least (see
+ *     {@code LatentStates}); 0 keeps the states of the supervised model. A model with latent
+ *     states has no context-dependent emissions, whatever {@code contextEmissions} says
  */
 public record TrainingOptions(
     int order,
@@ -38,10 +42,11 @@ public record TrainingOptions(
     boolean capitalisationStates,
     boolean contextEmissions,
     boolean lowercaseFirstWord,
-    int contextMinCount) {
+    int contextMinCount,
+    int latentRounds) {
 
   public static final TrainingOptions DEFAULTS =
-      new TrainingOptions(2, 10, 10, SuffixWeightRule.HELD_OUT, Double.NaN, 0.002, false, true, true, true, 3);
+      new TrainingOptions(2, 10, 10, SuffixWeightRule.HELD_OUT, Double.NaN, 0.002, false, true, true, true, 3, 0);
 
   /** The classic second-order model with a suffix model and none of the later cues. */
   public static final TrainingOptions CLASSIC = DEFAULTS.withCues(false, false, false);
@@ -69,6 +74,9 @@ public record TrainingOptions(
     if (suffixWeightRule == SuffixWeightRule.FIXED && !(suffixWeight > 0 && suffixWeight < Double.POSITIVE_INFINITY)) {
       throw new IllegalArgumentException("suffix weight must be positive: " + suffixWeight);
     }
+    if (latentRounds < 0 || latentRounds > LatentStates.MAX_ROUNDS) {
+      throw new IllegalArgumentException("latent rounds must be in 0.." + LatentStates.MAX_ROUNDS + ": " + latentRounds);
+    }
     if (contextMinCount < 1) {
       throw new IllegalArgumentException("context count must be at least 1: " + contextMinCount);
     }
@@ -79,40 +87,46 @@ public record TrainingOptions(
 
   public TrainingOptions withOrder(int newOrder) {
     return new TrainingOptions(newOrder, maxSuffixLength, rareWordMaxCount, suffixWeightRule, suffixWeight,
-        openClassMinShare, shapeClasses, capitalisationStates, contextEmissions, lowercaseFirstWord, contextMinCount);
+        openClassMinShare, shapeClasses, capitalisationStates, contextEmissions, lowercaseFirstWord, contextMinCount, latentRounds);
   }
 
   /** A fixed θ. */
   public TrainingOptions withSuffixWeight(double weight) {
     return new TrainingOptions(order, maxSuffixLength, rareWordMaxCount, SuffixWeightRule.FIXED, weight,
-        openClassMinShare, shapeClasses, capitalisationStates, contextEmissions, lowercaseFirstWord, contextMinCount);
+        openClassMinShare, shapeClasses, capitalisationStates, contextEmissions, lowercaseFirstWord, contextMinCount, latentRounds);
   }
 
   /** θ chosen by a rule rather than given. */
   public TrainingOptions withSuffixWeightRule(SuffixWeightRule rule) {
     return new TrainingOptions(order, maxSuffixLength, rareWordMaxCount, rule, Double.NaN,
-        openClassMinShare, shapeClasses, capitalisationStates, contextEmissions, lowercaseFirstWord, contextMinCount);
+        openClassMinShare, shapeClasses, capitalisationStates, contextEmissions, lowercaseFirstWord, contextMinCount, latentRounds);
   }
 
   public TrainingOptions withShapeClasses(boolean shapes) {
     return new TrainingOptions(order, maxSuffixLength, rareWordMaxCount, suffixWeightRule, suffixWeight,
-        openClassMinShare, shapes, capitalisationStates, contextEmissions, lowercaseFirstWord, contextMinCount);
+        openClassMinShare, shapes, capitalisationStates, contextEmissions, lowercaseFirstWord, contextMinCount, latentRounds);
   }
 
   public TrainingOptions withSuffix(int maxLength, int rareMaxCount) {
     return new TrainingOptions(order, maxLength, rareMaxCount, suffixWeightRule, suffixWeight,
-        openClassMinShare, shapeClasses, capitalisationStates, contextEmissions, lowercaseFirstWord, contextMinCount);
+        openClassMinShare, shapeClasses, capitalisationStates, contextEmissions, lowercaseFirstWord, contextMinCount, latentRounds);
   }
 
   public TrainingOptions withOpenClassMinShare(double share) {
     return new TrainingOptions(order, maxSuffixLength, rareWordMaxCount, suffixWeightRule, suffixWeight,
-        share, shapeClasses, capitalisationStates, contextEmissions, lowercaseFirstWord, contextMinCount);
+        share, shapeClasses, capitalisationStates, contextEmissions, lowercaseFirstWord, contextMinCount, latentRounds);
   }
 
   /** The three cues beyond the classic model, each on or off. */
   public TrainingOptions withCues(boolean capitalisation, boolean context, boolean lowercaseFirst) {
     return new TrainingOptions(order, maxSuffixLength, rareWordMaxCount, suffixWeightRule, suffixWeight,
-        openClassMinShare, shapeClasses, capitalisation, context, lowercaseFirst, contextMinCount);
+        openClassMinShare, shapeClasses, capitalisation, context, lowercaseFirst, contextMinCount, latentRounds);
+  }
+
+  /** Rounds of latent sub-state splitting (0 for none). */
+  public TrainingOptions withLatentRounds(int rounds) {
+    return new TrainingOptions(order, maxSuffixLength, rareWordMaxCount, suffixWeightRule, suffixWeight,
+        openClassMinShare, shapeClasses, capitalisationStates, contextEmissions, lowercaseFirstWord, contextMinCount, rounds);
   }
 
   /** The options as provenance entries. */
@@ -129,6 +143,7 @@ public record TrainingOptions(
     m.put("option.contextEmissions", Boolean.toString(contextEmissions));
     m.put("option.lowercaseFirstWord", Boolean.toString(lowercaseFirstWord));
     m.put("option.contextMinCount", Integer.toString(contextMinCount));
+    m.put("option.latentRounds", Integer.toString(latentRounds));
     return m;
   }
 }

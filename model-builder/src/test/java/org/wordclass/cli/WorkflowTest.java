@@ -109,6 +109,21 @@ class WorkflowTest {
   }
 
   @Test
+  void latentRoundsSplitTheStates() throws Exception {
+    Path out = dir.resolve("latent.wcm");
+    Cli.Result r = Cli.run("train", "--corpus", trainConllu.toString(), "--out", out.toString(),
+        "--order", "1", "--latent-rounds", "1");
+    assertEquals(0, r.exitCode(), r::toString);
+    HmmModel latent = ModelFile.read(out);
+    assertEquals("1", latent.provenance().get("option.latentRounds"));
+    // each state split in two, half of the splits merged back
+    int states = ModelFile.read(model).states().size();
+    assertEquals(states + states / 2, latent.states().size());
+    assertEquals(picocli.CommandLine.ExitCode.USAGE, Cli.run("train", "--corpus", trainConllu.toString(),
+        "--out", out.toString(), "--latent-rounds", "-1").exitCode());
+  }
+
+  @Test
   void trainingTwiceGivesTheSameBytesWhereverTheInputLies() throws Exception {
     Path elsewhere = Files.createDirectories(dir.resolve("elsewhere"));
     Path copy = Files.copy(trainConllu, elsewhere.resolve("train.conllu"));
