@@ -75,7 +75,8 @@ public final class Lattice {
     int start = candidateStart[size];
     int end = word >= 0 ? addKnown(word, flags, tag, start) : addUnknown(buf, off, len, flags, tag, start);
     if (end == start) {
-      throw new IllegalArgumentException("'" + new String(buf, off, len) + "' cannot take tag " + model.tags().name(tag));
+      throw new IllegalArgumentException("'" + new String(buf, off, len) + "' cannot take "
+          + (tag < 0 ? "any state of the model" : "tag " + model.tags().name(tag)));
     }
     candidateStart[size + 1] = end;
     size++;

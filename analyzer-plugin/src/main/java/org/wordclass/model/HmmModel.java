@@ -82,6 +82,12 @@ public final class HmmModel {
     if (logBigram.length != (long) n * n || logTrigram.length != (long) n * n * n) {
       throw new IllegalArgumentException("transition tables do not match " + states.size() + " states");
     }
+    for (int k = 0; k < unknownWords.openTagCount(); k++) {
+      // an unknown word's candidates are the states of the open tags: none would leave it none
+      if (unknownWords.openTag(k) >= tags.size() || states.statesOf(unknownWords.openTag(k)).length == 0) {
+        throw new IllegalArgumentException("open tag " + unknownWords.openTag(k) + " has no state");
+      }
+    }
     this.order = order;
     this.tags = tags;
     this.states = states;
