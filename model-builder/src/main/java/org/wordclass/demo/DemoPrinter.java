@@ -52,7 +52,7 @@ public final class DemoPrinter {
       printTagging(report);
     }
     out.println();
-    out.println(TRY);
+    wrap(TRY);
     out.flush();
   }
 
@@ -71,9 +71,6 @@ public final class DemoPrinter {
     for (Row row : c.rows()) {
       out.printf(Locale.ROOT, format, row.id(), rank(row.plainRank()), rank(row.comparedRank()), tagged(row),
           row.reader() == null ? "?" : row.reader(), row.snippet());
-    }
-    if (c.rows().isEmpty()) {
-      out.println("  (no notice has '" + c.word() + "')");
     }
     for (String note : c.notes()) {
       out.println("  > " + note);

@@ -25,12 +25,14 @@ final class Notes {
 
   /** Notes on a search restricted to {@code wordClass}: what it rightly removed, lost and let through. */
   List<String> restricted(String wordClass, List<Row> rows) {
-    List<String> notes = new ArrayList<>();
+    if (rows.isEmpty()) {
+      return List.of(absent());
+    }
     List<Row> judged = where(rows, row -> row.reader() != null);
     if (judged.isEmpty()) {
-      notes.add("no notice says which class '" + word + "' has; the tags column shows what the tagger decided");
-      return notes;
+      return List.of("no notice says which class '" + word + "' has; the tags column shows what the tagger decided");
     }
+    List<String> notes = new ArrayList<>();
     List<Row> restricted = where(judged, row -> row.comparedRank() > 0);
     notes.add(String.format(Locale.ROOT, "%s uses, by the reader: %d of %d plain hits, %d of %d restricted hits",
         wordClass, count(judged, wordClass), judged.size(), count(restricted, wordClass), restricted.size()));
@@ -52,11 +54,10 @@ final class Notes {
 
   /** Notes on the noun-boosted search: which use leads each ranking; the hits are the same. */
   List<String> boosted(List<Row> rows) {
-    List<String> notes = new ArrayList<>();
     if (rows.isEmpty()) {
-      notes.add("'" + word + "' is in no notice");
-      return notes;
+      return List.of(absent());
     }
+    List<String> notes = new ArrayList<>();
     Row plainFirst = rows.stream().filter(row -> row.plainRank() > 0).min(Comparator.comparingInt(Row::plainRank)).orElseThrow();
     Row boostedFirst = rows.get(0);
     notes.add("first hit: plain doc " + plainFirst.id() + " (" + plainFirst.tagLabel() + ", " + quote(plainFirst)
@@ -65,6 +66,10 @@ final class Notes {
     notes.add((sameHits ? "the same " + rows.size() + " hits in both: weighting reorders, it removes nothing"
         : "the hits differ, which weighting alone should never do"));
     return notes;
+  }
+
+  private String absent() {
+    return "no notice has '" + word + "'";
   }
 
   private static List<Row> where(List<Row> rows, Predicate<Row> test) {
