@@ -6,6 +6,9 @@ import java.util.regex.Pattern;
 /** Short pieces of a notice around a word, for tables and notes that must fit a terminal line. */
 final class Snippets {
   private static final String ELLIPSIS = "...";
+  /** The last word of a text, and the first; punctuation around them is left out. */
+  private static final Pattern WORD_BEFORE = Pattern.compile("([\\p{L}\\p{N}'-]+)[^\\p{L}\\p{N}]*$");
+  private static final Pattern WORD_AFTER = Pattern.compile("^[^\\p{L}\\p{N}]*([\\p{L}\\p{N}'-]+)");
 
   private Snippets() {}
 
@@ -26,7 +29,7 @@ final class Snippets {
     }
     String marked = text.substring(0, m.start()) + "[" + m.group() + "]" + text.substring(m.end());
     // a little more context before the word than after reads best in a column
-    int start = wordStart(marked, Math.max(0, m.start() - width / 3));
+    int start = wordStart(marked, Math.max(0, m.start() - width / 3), m.start());
     return (start > 0 ? ELLIPSIS : "") + cut(marked, start, width);
   }
 
@@ -36,18 +39,16 @@ final class Snippets {
     if (m == null) {
       return word;
     }
-    String before = text.substring(0, m.start()).replaceAll(".*?([\\p{L}\\p{N}'-]+)\\W*$", "$1 ");
-    String after = text.substring(m.end()).replaceAll("^\\W*([\\p{L}\\p{N}'-]+).*", " $1");
-    return (m.start() == 0 ? "" : before) + m.group() + (m.end() == text.length() ? "" : after);
+    Matcher before = WORD_BEFORE.matcher(text.substring(0, m.start()));
+    Matcher after = WORD_AFTER.matcher(text.substring(m.end()));
+    return (before.find() ? before.group(1) + " " : "") + m.group() + (after.find() ? " " + after.group(1) : "");
   }
 
-  private static int wordStart(String text, int from) {
+  /** The first word start at or after {@code from}, but never past the marked word at {@code mark}. */
+  private static int wordStart(String text, int from, int mark) {
     int i = from;
-    while (i > 0 && !Character.isWhitespace(text.charAt(i - 1))) {
+    while (i > 0 && i < mark && !Character.isWhitespace(text.charAt(i - 1))) {
       i++;
-      if (i >= text.length()) {
-        return from;
-      }
     }
     return i;
   }
