@@ -53,8 +53,15 @@ final class Snippets {
     return i;
   }
 
+  /** {@code text} from {@code start}, cut at a space to fit {@code width} with the ellipsis. */
   private static String cut(String text, int start, int width) {
     String rest = text.substring(start);
-    return rest.length() <= width ? rest : rest.substring(0, width - ELLIPSIS.length()).stripTrailing() + ELLIPSIS;
+    if (rest.length() <= width) {
+      return rest;
+    }
+    int end = width - ELLIPSIS.length();
+    int space = rest.lastIndexOf(' ', end);
+    // a half word reads worse than a shorter line, unless the cut would leave almost nothing
+    return rest.substring(0, space > end / 2 ? space : end).stripTrailing() + ELLIPSIS;
   }
 }

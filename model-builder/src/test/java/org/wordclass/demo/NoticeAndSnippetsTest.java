@@ -46,7 +46,7 @@ class NoticeAndSnippetsTest {
   @Test
   void snippetMarksTheWholeWordAndStartsAtAWord() {
     String text = "The notice board by the waiting room lists every change to the timetable.";
-    assertEquals("The notice [board] by the waiting room list...", Snippets.around(text, "board", 46));
+    assertEquals("The notice [board] by the waiting room...", Snippets.around(text, "board", 46));
     assertEquals("...by the waiting [room] lists every change to...", Snippets.around(text, "room", 46));
     // 'boarding' is another word, not a match
     assertEquals("...so [board] now.", Snippets.around("When boarding starts, so board now.", "board", 20));
