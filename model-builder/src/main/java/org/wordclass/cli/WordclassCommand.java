@@ -10,8 +10,8 @@ import picocli.CommandLine.ScopeType;
 import picocli.CommandLine.Spec;
 
 /**
- * The {@code wordclass} command line: trains, evaluates, cross-validates and inspects word-class
- * models and tags text with them. Every subcommand is registered in {@link #subcommands()}, the
+ * The {@code wordclass} command line: demonstrates class-aware search, trains, evaluates,
+ * cross-validates and inspects word-class models and tags text with them. Every subcommand is registered in {@link #subcommands()}, the
  * one place a new one is added.
  */
 @Command(
@@ -32,6 +32,7 @@ public final class WordclassCommand implements Callable<Integer> {
   /** The subcommands, in the order the help lists them. */
   static List<Object> subcommands() {
     return List.of(
+        new DemoCommand(),
         new TrainCommand(),
         new EvaluateCommand(),
         new CrossValidateCommand(),
