@@ -8,7 +8,6 @@ import java.util.Locale;
 import java.util.Map;
 import org.wordclass.corpus.Corpus;
 import org.wordclass.corpus.CorpusFormat;
-import org.wordclass.corpus.Sentence;
 import org.wordclass.corpus.TagColumn;
 import org.wordclass.evaluation.Evaluation;
 import org.wordclass.evaluation.EvaluationReport;
@@ -83,12 +82,12 @@ final class LearningCurveCommand extends BaseCommand {
 
   private static Point point(Corpus train, Corpus test, int size, TrainingOptions options) {
     TagCounts counts = new TagCounts();
-    for (Sentence s : train) {
-      if (counts.sentences() >= size) {
-        break;
+    // a whole pass, so the corpus's files are read to the end and closed
+    train.forEach(s -> {
+      if (counts.sentences() < size) {
+        counts.add(s.words(), s.tags());
       }
-      counts.add(s.words(), s.tags());
-    }
+    });
     Evaluation evaluation = new Evaluation(new HmmEstimator(options).estimate(counts, Map.of()));
     test.forEach(evaluation::add);
     EvaluationReport r = evaluation.report();
