@@ -207,7 +207,7 @@ public final class UserLexicon {
         }
       }
       if (lineTags.isEmpty()) {
-        throw error(line, "expected a word and one or more classes, " + EXAMPLE + ", not '" + text.strip() + "'");
+        throw error(line, "expected a word and one or more classes, " + EXAMPLE + ", not '" + String.join(" ", fields) + "'");
       }
       Entry entry = new Entry(fields[0], line, lineTags.stream().mapToInt(Integer::intValue).toArray(),
           lineWeights.stream().mapToDouble(Double::doubleValue).toArray(), anyCase != null && anyCase);
