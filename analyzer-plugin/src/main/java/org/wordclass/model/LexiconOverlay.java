@@ -30,9 +30,9 @@ import java.util.TreeMap;
  * A word written exactly in the file wins over the case forms of a {@code case=any} entry.
  *
  * <p>Cost: one pass over the model's lexicon and a copy of it and of the transition tables; for
- * the bundled English model (19,000 words) about 15 ms and a few megabytes, once per distinct
- * model and lexicon pair (see {@code ModelCache}). Decoding with the result costs exactly what
- * decoding with the model does.
+ * the bundled English model (19,842 words) 50 to 140 ms on a busy 2-core machine and about the
+ * model's own heap, once per distinct model and lexicon pair (see {@code ModelCache}). Decoding
+ * with the result costs what decoding with the model does.
  */
 public final class LexiconOverlay {
   private LexiconOverlay() {}

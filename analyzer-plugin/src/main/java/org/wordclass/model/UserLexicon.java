@@ -18,6 +18,7 @@ import java.util.Locale;
 import java.util.Map;
 import java.util.Set;
 import java.util.TreeMap;
+import java.util.regex.Pattern;
 
 /**
  * A user's corrections of a model's lexicon for their own domain, kept in a small UTF-8 text file
@@ -39,7 +40,7 @@ import java.util.TreeMap;
  * <p>The whole file is parsed and every line checked against the model's tag set before anything
  * is built from it, so a bad file is refused whole, never half-applied: a {@link
  * LexiconFormatException} names the file, the line and the reason. Parsing costs time linear in
- * the file (about a millisecond per thousand lines) and holds one small object per entry.
+ * the file (under 20 ms for a thousand lines) and holds one small object per entry.
  * Immutable.
  */
 public final class UserLexicon {
@@ -48,6 +49,7 @@ public final class UserLexicon {
 
   static final String CASE_OPTION = "case=";
   private static final String EXAMPLE = "such as 'cook NOUN VERB:2'";
+  private static final Pattern FIELD_SEPARATOR = Pattern.compile("[ \t]+");
 
   /**
    * One listed word.
@@ -192,7 +194,7 @@ public final class UserLexicon {
     }
 
     private void parseLine(String text, int line) throws LexiconFormatException {
-      String[] fields = withoutComment(text.strip().split("[ \t]+"));
+      String[] fields = withoutComment(FIELD_SEPARATOR.split(text.strip()));
       if (fields.length == 0) {
         return;
       }

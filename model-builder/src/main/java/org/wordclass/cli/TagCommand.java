@@ -15,11 +15,14 @@ import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
 
-/** {@code wordclass tag}: tags raw text, one sentence per line, and prints a tag per token. */
+/**
+ * {@code wordclass tag}: tags raw text, one sentence per line, and prints a tag per token; with
+ * {@code --explain} or {@code --json}, also why (see docs/user-lexicon.md).
+ */
 @Command(name = "tag", mixinStandardHelpOptions = true,
     description = "Tags text given as arguments or, without arguments, read from standard input (UTF-8), "
         + "one sentence per line. Prints token<TAB>tag<TAB>confidence per token and a blank line "
-        + "between sentences.")
+        + "between sentences; with --explain, token<TAB>tag<TAB>confidence<TAB>how<TAB>next best classes.")
 final class TagCommand extends BaseCommand {
   @Mixin
   ModelOption model;
