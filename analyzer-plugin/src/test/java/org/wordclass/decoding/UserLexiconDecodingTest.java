@@ -76,6 +76,38 @@ class UserLexiconDecodingTest {
     assertEquals(List.of(CandidateSource.USER_LEXICON, CandidateSource.USER_LEXICON), sources(lattice));
   }
 
+  @Test
+  void reportingSourcesAllocatesNothingPerToken() throws Exception {
+    Decoder decoder = new Decoder(withLexicon("cook NOUN VERB\nzest VERB case=any\n"));
+    char[][] tokens = Arrays.stream("Zest the broth the cook made for Qwertyville".split(" "))
+        .map(String::toCharArray).toArray(char[][]::new);
+    int[] best = new int[tokens.length];
+    long[] checksum = new long[1];
+    Runnable sentence = () -> {
+      Lattice lattice = decoder.lattice();
+      lattice.clear();
+      for (char[] t : tokens) {
+        lattice.add(t, 0, t.length);
+      }
+      decoder.viterbi(best);
+      for (int i = 0; i < lattice.size(); i++) {
+        checksum[0] += lattice.source(i).ordinal() + lattice.matchedEndingLength(i);
+      }
+    };
+    for (int i = 0; i < 2_000; i++) {
+      sentence.run(); // warm up: buffers reach their size, code is compiled
+    }
+    com.sun.management.ThreadMXBean threads = (com.sun.management.ThreadMXBean) java.lang.management.ManagementFactory.getThreadMXBean();
+    long before = threads.getCurrentThreadAllocatedBytes();
+    for (int i = 0; i < 2_000; i++) {
+      sentence.run();
+    }
+    long allocated = threads.getCurrentThreadAllocatedBytes() - before;
+    // 16,000 tokens: a single object per token would be well over 100 KB
+    assertTrue(allocated < 4_096, allocated + " bytes allocated");
+    assertTrue(checksum[0] > 0);
+  }
+
   private static List<CandidateSource> sources(Lattice lattice) {
     CandidateSource[] out = new CandidateSource[lattice.size()];
     Arrays.setAll(out, lattice::source);

@@ -42,7 +42,8 @@ final class TagCommand extends BaseCommand {
           + "best classes with their probabilities.")
   boolean explain;
 
-  @Option(names = "--json", description = "Print the explanations as one JSON document instead of text.")
+  @Option(names = "--json",
+      description = "Print what --explain prints as one JSON document, for tools (implies --explain).")
   boolean json;
 
   @Parameters(paramLabel = "TEXT", arity = "0..*",
