@@ -102,6 +102,8 @@ public final class WordClassFilter extends TokenFilter {
   private boolean carried;
   private boolean exhausted;
   private boolean qualifiedPending;
+  /** The pool is still to be checked against this stream's attributes (see {@link #fillWindow}). */
+  private boolean poolUnchecked = true;
 
   /** Tags with {@code model} using the defaults of {@link WordClassOptions#of}. */
   public WordClassFilter(TokenStream input, HmmModel model) {
@@ -136,6 +138,11 @@ public final class WordClassFilter extends TokenFilter {
 
   /** Buffers and decodes the next window; false when the input has no more tokens. */
   private boolean fillWindow() throws IOException {
+    if (poolUnchecked) {
+      // not in reset(): consumers such as Lucene's indexing chain add attributes after reset()
+      dropPoolIfAttributesChanged();
+      poolUnchecked = false;
+    }
     int size = 0;
     if (carried) {
       swapSlots(0, windowSize);
@@ -235,7 +242,7 @@ public final class WordClassFilter extends TokenFilter {
     exhausted = false;
     qualifiedPending = false;
     lattice.clear();
-    dropPoolIfAttributesChanged();
+    poolUnchecked = true;
   }
 
   /** Pooled slots are clones of this stream's attributes; a consumer may have added some since. */
