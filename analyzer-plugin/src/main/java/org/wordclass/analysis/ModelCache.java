@@ -4,15 +4,16 @@ import java.io.IOException;
 import java.io.InputStream;
 import java.lang.ref.ReferenceQueue;
 import java.lang.ref.WeakReference;
-import java.security.MessageDigest;
-import java.security.NoSuchAlgorithmException;
 import java.util.HashMap;
-import java.util.HexFormat;
 import java.util.Map;
 import org.apache.lucene.util.ResourceLoader;
+import org.wordclass.model.Checksums;
+import org.wordclass.model.DefaultModel;
 import org.wordclass.model.HmmModel;
+import org.wordclass.model.LexiconOverlay;
 import org.wordclass.model.ModelFile;
 import org.wordclass.model.ModelFormatException;
+import org.wordclass.model.UserLexicon;
 
 /**
  * Shares loaded models between all analyzers and threads of a JVM, so that a schema with many
@@ -24,6 +25,11 @@ import org.wordclass.model.ModelFormatException;
  * and hashing the bytes costs a few milliseconds per lookup; parsing, which costs far more, is
  * done once per distinct file. Entries hold models weakly, so a model is freed when the last
  * analyzer using it is, and the cache never pins a reloaded configuration's class loader.
+ *
+ * <p>A model with a user lexicon applied ({@link LexiconOverlay}) is keyed by both files' bytes:
+ * every analyzer naming the same model and lexicon shares one derived model, and editing the
+ * lexicon gives a new one on reload. Applying a lexicon costs about as much as copying the
+ * model's lexicon, once per distinct pair.
  *
  * <p>Thread-safe. Two threads loading the same new file at once may both parse it; one result is
  * kept and returned to both.
@@ -51,6 +57,11 @@ public final class ModelCache {
    *     org.wordclass.model.ModelFormatException} naming the resource if it is not a valid model
    */
   public static HmmModel load(ResourceLoader loader, String name) throws IOException {
+    return get(readModelBytes(loader, name), name);
+  }
+
+  /** The bytes of model resource {@code name}, refusing more than any model holds. */
+  public static byte[] readModelBytes(ResourceLoader loader, String name) throws IOException {
     byte[] bytes;
     try (InputStream in = loader.openResource(name)) {
       bytes = in.readNBytes((int) ModelFile.MAX_FILE_BYTES + 1);
@@ -58,12 +69,32 @@ public final class ModelCache {
     if (bytes.length > ModelFile.MAX_FILE_BYTES) {
       throw new ModelFormatException(name + ": larger than any model (" + ModelFile.MAX_FILE_BYTES + " bytes)");
     }
-    return get(bytes, name);
+    return bytes;
+  }
+
+  /**
+   * The model in {@code modelBytes} (the bundled model when null) with the user lexicon in
+   * {@code lexiconBytes} applied, shared with every other user of the same two files. The
+   * lexicon is parsed whole, and checked against the model's classes, before the model is built.
+   *
+   * @throws org.wordclass.model.LexiconFormatException naming {@code lexiconName}, line and reason
+   */
+  public static HmmModel withLexicon(byte[] modelBytes, String modelName, byte[] lexiconBytes, String lexiconName)
+      throws IOException {
+    String modelKey = modelBytes == null ? "bundled:" + DefaultModel.RESOURCE : Checksums.sha256(modelBytes);
+    String key = modelKey + "+lexicon:" + Checksums.sha256(lexiconBytes);
+    HmmModel cached = lookup(key);
+    if (cached != null) {
+      return cached;
+    }
+    HmmModel model = modelBytes == null ? DefaultModel.get() : get(modelBytes, modelName);
+    UserLexicon lexicon = UserLexicon.parse(lexiconBytes, lexiconName, model.tags());
+    return putIfAbsent(key, LexiconOverlay.apply(model, lexicon));
   }
 
   /** The model held in {@code bytes}, parsed only if no live model has the same bytes. */
   public static HmmModel get(byte[] bytes, String name) throws IOException {
-    String key = sha256(bytes);
+    String key = Checksums.sha256(bytes);
     HmmModel cached = lookup(key);
     if (cached != null) {
       return cached;
@@ -98,13 +129,5 @@ public final class ModelCache {
   static synchronized int size() {
     purgeCleared();
     return MODELS.size();
-  }
-
-  private static String sha256(byte[] bytes) {
-    try {
-      return HexFormat.of().formatHex(MessageDigest.getInstance("SHA-256").digest(bytes));
-    } catch (NoSuchAlgorithmException e) {
-      throw new AssertionError("every JVM has SHA-256", e);
-    }
   }
 }

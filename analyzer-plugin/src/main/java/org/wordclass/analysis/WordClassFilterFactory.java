@@ -1,6 +1,7 @@
 package org.wordclass.analysis;
 
 import java.io.IOException;
+import java.io.InputStream;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Locale;
@@ -12,7 +13,9 @@ import org.apache.lucene.util.ResourceLoader;
 import org.apache.lucene.util.ResourceLoaderAware;
 import org.wordclass.model.DefaultModel;
 import org.wordclass.model.HmmModel;
+import org.wordclass.model.LexiconFormatException;
 import org.wordclass.model.ModelFormatException;
+import org.wordclass.model.UserLexicon;
 
 /**
  * Factory for {@link WordClassFilter}, followed by a {@link WordClassSelectFilter} when classes
@@ -33,6 +36,12 @@ import org.wordclass.model.ModelFormatException;
  *   <li>{@code model}: resource name of a model file, read through the resource loader (so a
  *       path in the configuration directory works); default the bundled English UPOS model.
  *       Loaded models are shared through {@link ModelCache}.
+ *   <li>{@code lexicon}: resource name of a user lexicon (see {@link UserLexicon} and {@code
+ *       docs/user-lexicon.md}), read through the resource loader like the model: the words it
+ *       lists take only the classes it gives them, every other word is tagged as before. The
+ *       model with the lexicon applied is shared through {@link ModelCache} by every analyzer
+ *       naming the same model and lexicon files. A malformed lexicon fails {@link #inform},
+ *       naming the file, line and reason.
  *   <li>{@code order}: {@code 1} or {@code 2}, the order of the transitions to decode with;
  *       default the order the model was trained for. Order 1 is faster, order 2 more accurate.
  *   <li>{@code confidence}: {@code true} to compute each token's posterior probability into
@@ -66,6 +75,7 @@ public class WordClassFilterFactory extends TokenFilterFactory implements Resour
   private static final int MODEL_ORDER = 0;
 
   private final String modelName;
+  private final String lexiconName;
   private final int order;
   private final boolean confidence;
   private final PayloadEncoding payload;
@@ -83,6 +93,10 @@ public class WordClassFilterFactory extends TokenFilterFactory implements Resour
   public WordClassFilterFactory(Map<String, String> args) {
     super(args);
     modelName = get(args, "model");
+    lexiconName = get(args, "lexicon");
+    if (lexiconName != null && lexiconName.isBlank()) {
+      throw new IllegalArgumentException("'lexicon' must name a resource");
+    }
     String orderArg = get(args, "order", List.of("1", "2"));
     order = orderArg == null ? MODEL_ORDER : Integer.parseInt(orderArg);
     confidence = booleanArg(args, "confidence");
@@ -184,10 +198,11 @@ public class WordClassFilterFactory extends TokenFilterFactory implements Resour
     }
   }
 
-  /** Loads the model and checks every class name against its tag set. */
+  /** Loads the model, applies the lexicon if any, and checks every class name against its tag set. */
   @Override
   public void inform(ResourceLoader loader) throws IOException {
-    HmmModel model = modelName == null ? DefaultModel.get() : load(loader, modelName);
+    HmmModel model = lexiconName != null ? withLexicon(loader)
+        : modelName == null ? DefaultModel.get() : load(loader, modelName);
     if (selectedClasses != null) {
       WordClasses.mask(model.tags(), selectedClasses, keep ? "keepClasses" : "dropClasses");
     }
@@ -202,13 +217,34 @@ public class WordClassFilterFactory extends TokenFilterFactory implements Resour
   }
 
   private static HmmModel load(ResourceLoader loader, String name) throws IOException {
+    return read("model", name, () -> ModelCache.load(loader, name));
+  }
+
+  /** Both files are read in full before the lexicon is parsed, and parsed before the model is built. */
+  private HmmModel withLexicon(ResourceLoader loader) throws IOException {
+    byte[] modelBytes = modelName == null ? null : read("model", modelName, () -> ModelCache.readModelBytes(loader, modelName));
+    byte[] lexiconBytes = read("lexicon", lexiconName, () -> {
+      try (InputStream in = loader.openResource(lexiconName)) {
+        return UserLexicon.readBytes(in, lexiconName);
+      }
+    });
+    return ModelCache.withLexicon(modelBytes, modelName, lexiconBytes, lexiconName);
+  }
+
+  /** An I/O step on resource {@code name} of argument {@code arg}; a plain read failure names both. */
+  private static <T> T read(String arg, String name, IoStep<T> step) throws IOException {
     try {
-      return ModelCache.load(loader, name);
-    } catch (ModelFormatException e) {
+      return step.run();
+    } catch (ModelFormatException | LexiconFormatException e) {
       throw e;
     } catch (IOException e) {
-      throw new IOException("'model': cannot read the model resource " + name + ": " + e.getMessage(), e);
+      throw new IOException("'" + arg + "': cannot read the " + arg + " resource " + name + ": " + e.getMessage(), e);
     }
+  }
+
+  @FunctionalInterface
+  private interface IoStep<T> {
+    T run() throws IOException;
   }
 
   /** The settings and model of the filters made, once {@link #inform} has run. */

@@ -312,6 +312,19 @@ public final class Decoder {
   }
 
   /**
+   * Writes into {@code out[t]} the posterior probability that token {@code position} has tag t
+   * (summed over the states of t; 0 for tags that are not candidates). Allocates nothing.
+   *
+   * @param out at least as long as the model's tag set
+   */
+  public void tagPosteriors(int position, double[] out) {
+    Arrays.fill(out, 0, model.tags().size(), 0.0);
+    for (int c = 0; c < lattice.candidateCount(position); c++) {
+      out[lattice.candidateTag(position, c)] += posterior(position, c);
+    }
+  }
+
+  /**
    * Adds to {@code counts} the expected number of times each transition is taken in the sequence
    * of the last {@link #forwardBackward} call, given the whole sequence: the expectation step of
    * Baum-Welch (forward-backward) re-estimation. At order 1 these are the pair posteriors

@@ -11,7 +11,9 @@ import org.wordclass.model.UnknownWordModel;
  * known word's own states (the lexicon constraint), or the states of the open classes scored by
  * the unknown-word model. Where the model splits classes by capitalisation, only the states that
  * match how the token is written are candidates. Where a word's emission depends on the
- * previous state, the lattice holds one emission per (previous candidate, candidate) pair.
+ * previous state, the lattice holds one emission per (previous candidate, candidate) pair. Each
+ * position also records how its candidates were chosen ({@link #source}) and, for unknown words,
+ * the length of the ending the suffix model matched: two stores per token, for explanations.
  *
  * <p>Filled token by token from char buffers and reused across sequences, so steady-state
  * decoding allocates nothing. Not thread-safe: one per decoding thread.
@@ -29,6 +31,10 @@ public final class Lattice {
   private double[] candidateLogEmission = new double[256];
   private int[] candidateEntry = new int[256];
   private int[] wordId = new int[64];
+  private byte[] source = new byte[64];
+  private short[] endingLength = new short[64];
+  /** Whether the last {@link #lookup} found the word only in lower case. */
+  private boolean foundLowerCased;
   private int[] pairStart = new int[65];
   private double[] pairLogEmission = new double[1024];
 
@@ -73,6 +79,8 @@ public final class Lattice {
     int word = lookup(buf, off, len);
     wordId[size] = word;
     int start = candidateStart[size];
+    endingLength[size] = 0;
+    source[size] = (byte) sourceOf(word).ordinal();
     int end = word >= 0 ? addKnown(word, flags, tag, start) : addUnknown(buf, off, len, flags, tag, start);
     if (end == start) {
       throw new IllegalArgumentException("'" + new String(buf, off, len) + "' cannot take "
@@ -102,10 +110,21 @@ public final class Lattice {
     return len > 0 && (Character.isUpperCase(buf[off]) || Character.isTitleCase(buf[off]));
   }
 
+  private CandidateSource sourceOf(int word) {
+    if (word < 0) {
+      return CandidateSource.UNKNOWN;
+    }
+    if (model.lexicon().isUserListed(word)) {
+      return CandidateSource.USER_LEXICON;
+    }
+    return foundLowerCased ? CandidateSource.LOWERCASED_FIRST_WORD : CandidateSource.KNOWN;
+  }
+
   /** The word's id; a capitalised first word missing from the lexicon is looked up in lower case. */
   private int lookup(char[] buf, int off, int len) {
     Lexicon lexicon = model.lexicon();
     int word = lexicon.lookup(buf, off, len);
+    foundLowerCased = false;
     if (word < 0 && size == 0 && model.cues().lowercaseFirstWord() && startsWithCapital(buf, off, len)) {
       if (lowerCased.length < len) {
         lowerCased = new char[Math.max(len, 2 * lowerCased.length)];
@@ -114,6 +133,7 @@ public final class Lattice {
         lowerCased[i] = Character.toLowerCase(buf[off + i]);
       }
       word = lexicon.lookup(lowerCased, 0, len);
+      foundLowerCased = word >= 0;
     }
     return word;
   }
@@ -140,7 +160,7 @@ public final class Lattice {
 
   private int addUnknown(char[] buf, int off, int len, int flags, int tag, int start) {
     UnknownWordModel unknown = model.unknownWords();
-    unknown.logEmissions(buf, off, len, unknownScratch, unknownScores);
+    endingLength[size] = (short) unknown.logEmissions(buf, off, len, unknownScratch, unknownScores);
     int end = start;
     for (int pass = 0; pass < 2 && end == start; pass++) {
       for (int k = 0; k < unknown.openTagCount(); k++) {
@@ -221,6 +241,19 @@ public final class Lattice {
     return wordId[position] >= 0;
   }
 
+  /** How the candidates of the token at {@code position} were chosen. */
+  public CandidateSource source(int position) {
+    return CandidateSource.of(source[position]);
+  }
+
+  /**
+   * For an unknown token, the length of the longest ending of it that the suffix model had
+   * counts for (0 if none: its shape alone scored it); 0 for other tokens.
+   */
+  public int matchedEndingLength(int position) {
+    return endingLength[position];
+  }
+
   /** Lexicon id of the token at {@code position}, or -1 if it is unknown. */
   public int wordId(int position) {
     return wordId[position];
@@ -256,6 +289,8 @@ public final class Lattice {
       candidateStart = Arrays.copyOf(candidateStart, grown);
       pairStart = Arrays.copyOf(pairStart, grown);
       wordId = Arrays.copyOf(wordId, grown);
+      source = Arrays.copyOf(source, grown);
+      endingLength = Arrays.copyOf(endingLength, grown);
     }
   }
 

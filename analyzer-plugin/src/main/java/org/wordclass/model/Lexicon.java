@@ -12,7 +12,8 @@ import java.util.List;
  * <p>Words live in one {@code char[]} and are found through an open-addressing hash table that
  * is probed straight from a token's char buffer, so a lookup builds no String and allocates
  * nothing. Memory: about 2 bytes per character, 12 bytes per word and 6 bytes per word/tag
- * pair. Immutable and safe to share between threads.
+ * pair. Words put in by a {@link UserLexicon} are marked ({@link #isUserListed}), so that decoding
+ * can say a token's classes were fixed by the user. Immutable and safe to share between threads.
  */
 public final class Lexicon {
   /**
@@ -55,9 +56,23 @@ public final class Lexicon {
   private final short[] contextState;
   private final float[] contextLogEmission;
   private final boolean[] hasContexts;
+  /** Per word: listed by a user lexicon; null when no word is. */
+  private final boolean[] userListed;
 
   /** Builds a lexicon; entries must have distinct words. */
   public Lexicon(List<Entry> entries) {
+    this(entries, null);
+  }
+
+  /**
+   * Builds a lexicon whose entry {@code i} came from a user lexicon where {@code userListed[i]};
+   * {@code userListed} may be null for none.
+   */
+  public Lexicon(List<Entry> entries, boolean[] userListed) {
+    if (userListed != null && userListed.length != entries.size()) {
+      throw new IllegalArgumentException("one user-listed flag per entry expected");
+    }
+    this.userListed = userListed == null ? null : userListed.clone();
     int words = entries.size();
     wordStart = new int[words + 1];
     tagStart = new int[words + 1];
@@ -196,6 +211,20 @@ public final class Lexicon {
     return logEmissions[tagStart[word] + k];
   }
 
+  /** Whether the word's classes were set by a user lexicon rather than learnt by the model. */
+  public boolean isUserListed(int word) {
+    return userListed != null && userListed[word];
+  }
+
+  /** Number of words set by a user lexicon. */
+  public int userListedCount() {
+    int count = 0;
+    for (int w = 0; userListed != null && w < userListed.length; w++) {
+      count += userListed[w] ? 1 : 0;
+    }
+    return count;
+  }
+
   /** Whether the word's emissions depend on the previous state. */
   public boolean hasContexts(int word) {
     return hasContexts[word];
@@ -272,7 +301,7 @@ public final class Lexicon {
   /** Approximate heap size in bytes. */
   public long ramBytesUsed() {
     return 2L * chars.length + 4L * (wordStart.length + slots.length + tagStart.length) + 10L * tagIds.length
-        + 6L * contextState.length + words();
+        + 6L * contextState.length + (userListed == null ? 1 : 2) * words();
   }
 
   private int words() {

@@ -252,6 +252,33 @@ public class TestWordClassFilter extends BaseTokenStreamTestCase {
     }
   }
 
+  /**
+   * A consumer may add an attribute after reset(), as Lucene's indexing chain does, to a reused
+   * stream whose pooled copies of tokens were made without it.
+   */
+  public void testAttributeAddedAfterResetOnAReusedStream() throws IOException {
+    try (Analyzer a = analyzer(defaults())) {
+      assertEquals(List.of("They", "book", "a", "table"), terms(a, "They book a table", false));
+      assertEquals(List.of("We", "book", "the", "hall"), terms(a, "We book the hall", true));
+    }
+  }
+
+  private static List<String> terms(Analyzer a, String text, boolean addFlagsAfterReset) throws IOException {
+    try (TokenStream stream = a.tokenStream("body", text)) {
+      CharTermAttribute term = stream.addAttribute(CharTermAttribute.class);
+      stream.reset();
+      if (addFlagsAfterReset) {
+        stream.addAttribute(org.apache.lucene.analysis.tokenattributes.FlagsAttribute.class);
+      }
+      List<String> words = new ArrayList<>();
+      while (stream.incrementToken()) {
+        words.add(term.toString());
+      }
+      stream.end();
+      return words;
+    }
+  }
+
   public void testRandomStrings() throws IOException {
     for (boolean confidence : new boolean[] {false, true}) {
       WordClassOptions options = randomOptions().withConfidence(confidence).withQualifiedTerms(true);

@@ -1,10 +1,8 @@
 package org.wordclass.cli;
 
 import java.nio.ByteBuffer;
-import java.security.MessageDigest;
 import java.util.ArrayList;
 import java.util.Comparator;
-import java.util.HexFormat;
 import java.util.IdentityHashMap;
 import java.util.LinkedHashMap;
 import java.util.List;
@@ -15,6 +13,7 @@ import org.apache.lucene.codecs.CodecUtil;
 import org.apache.lucene.store.ByteBuffersDataInput;
 import org.apache.lucene.store.ByteBuffersIndexInput;
 import org.apache.lucene.store.IndexInput;
+import org.wordclass.model.Checksums;
 import org.wordclass.model.HmmModel;
 import org.wordclass.model.StateSpace;
 import org.wordclass.model.ModelFile;
@@ -54,6 +53,7 @@ final class InspectCommand extends BaseCommand {
       List<String> tags,
       int vocabulary,
       int wordTagPairs,
+      Integer lexiconEntries,
       List<String> openTags,
       Map<String, Integer> suffixTrieNodes,
       SortedMap<String, String> provenance,
@@ -74,9 +74,15 @@ final class InspectCommand extends BaseCommand {
     for (int k = 0; k < m.unknownWords().openTagCount(); k++) {
       open.add(m.tags().name(m.unknownWords().openTag(k)));
     }
-    return new ModelDescription(model.name(), bytes.length, crc32(bytes), sha256(bytes), m.ramBytesUsed(),
-        m.order(), m.tags().names(), m.lexicon().size(), m.lexicon().pairCount(), open, trieSizes(m),
+    return new ModelDescription(model.name(), bytes.length, crc32(bytes), Checksums.sha256(bytes), m.ramBytesUsed(),
+        m.order(), m.tags().names(), m.lexicon().size(), m.lexicon().pairCount(), lexiconEntries(m), open, trieSizes(m),
         m.provenance(), strongestTransitions(m));
+  }
+
+  /** Entries of the user lexicon the model was built with ({@code train --lexicon}), or null. */
+  private static Integer lexiconEntries(HmmModel m) {
+    String entries = m.provenance().get("lexicon.entries");
+    return entries == null ? null : Integer.valueOf(entries);
   }
 
   /** The checksum stored in the file's footer, as the Lucene codec utilities read it. */
@@ -85,10 +91,6 @@ final class InspectCommand extends BaseCommand {
         new ByteBuffersDataInput(List.of(ByteBuffer.wrap(bytes))), "model")) {
       return String.format(Locale.ROOT, "%08x", CodecUtil.retrieveChecksum(in));
     }
-  }
-
-  private static String sha256(byte[] bytes) throws Exception {
-    return HexFormat.of().formatHex(MessageDigest.getInstance("SHA-256").digest(bytes));
   }
 
   /** Nodes of each suffix trie, keyed by the word shapes that share it ({@code LOWER+ALL_CAPS}). */
@@ -143,6 +145,9 @@ final class InspectCommand extends BaseCommand {
     line(s, "order", d.order() + (d.order() == 2 ? " (tag trigrams)" : " (tag bigrams)"));
     line(s, "tags", d.tags().size() + ": " + String.join(" ", d.tags()));
     line(s, "vocabulary", d.vocabulary() + " words, " + d.wordTagPairs() + " word/tag pairs");
+    if (d.lexiconEntries() != null) {
+      line(s, "user lexicon", d.lexiconEntries() + " entries from " + d.provenance().get("lexicon.file"));
+    }
     line(s, "open tags", d.openTags().size() + ": " + String.join(" ", d.openTags()));
     s.append("suffix tries (nodes)\n");
     d.suffixTrieNodes().forEach((shapes, nodes) -> s.append(String.format(Locale.ROOT, "  %-40s %d%n", shapes, nodes)));

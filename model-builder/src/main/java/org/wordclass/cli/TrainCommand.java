@@ -32,6 +32,9 @@ final class TrainCommand extends BaseCommand {
   @Mixin
   AnalyzerOptions analysis;
 
+  @Mixin
+  LexiconOption lexicon;
+
   @Option(names = "--out", required = true, paramLabel = "MODEL", description = "The model file to write (.wcm).")
   Path out;
 
@@ -49,7 +52,8 @@ final class TrainCommand extends BaseCommand {
     progress.finish();
     Map<String, String> provenance = Provenance.of(input, corpus);
     analysis.describeInto(provenance);
-    HmmModel model = new HmmEstimator(options).estimate(counts, provenance);
+    // folded in before writing, so a bad lexicon leaves no model file behind
+    HmmModel model = lexicon.applyTo(new HmmEstimator(options).estimate(counts, provenance));
     ModelFile.write(model, out);
     printSummary(counts, model, progress.seconds());
     return OK;
@@ -63,6 +67,9 @@ final class TrainCommand extends BaseCommand {
     out().printf(Locale.ROOT, "tokens      %d%n", counts.tokens());
     out().printf(Locale.ROOT, "tags        %d%n", model.tags().size());
     out().printf(Locale.ROOT, "vocabulary  %d words%n", model.lexicon().size());
+    if (lexicon.path != null) {
+      out().printf(Locale.ROOT, "lexicon     %s entries from %s%n", model.provenance().get("lexicon.entries"), lexicon.path);
+    }
     out().printf(Locale.ROOT, "time        %.1f s%n", seconds);
     out().printf(Locale.ROOT, "model       %s (%d bytes, order %d)%n", out, Files.size(out), model.order());
     out().flush();

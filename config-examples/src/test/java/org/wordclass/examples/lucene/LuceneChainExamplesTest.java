@@ -92,6 +92,22 @@ public class LuceneChainExamplesTest extends BaseTokenStreamTestCase {
     }
   }
 
+  public void testUserLexicon() throws IOException {
+    try (Analyzer plain = chain("classes-as-types"); Analyzer analyzer = chain("user-lexicon")) {
+      String scramble = "Scramble up the scree to the col";
+      // the bundled model's reading, before the club's lexicon
+      assertAnalyzesTo(plain, scramble, new String[] {"scrambl", "up", "the", "scree", "to", "the", "col"},
+          new String[] {"NOUN", "ADP", "DET", "NOUN", "ADP", "DET", "NOUN"});
+      assertAnalyzesTo(analyzer, scramble, new String[] {"scramble", "up", "the", "scree", "to", "the", "col"},
+          new String[] {"VERB", "ADP", "DET", "NOUN", "ADP", "DET", "NOUN"});
+      assertAnalyzesTo(analyzer, "Ford the stream at dawn", new String[] {"ford", "the", "stream", "at", "dawn"},
+          new String[] {"VERB", "DET", "NOUN", "ADP", "NOUN"});
+      // both classes are listed, so the context still makes this one a noun
+      assertAnalyzesTo(analyzer, "The scramble took an hour", new String[] {"the", "scramble", "took", "an", "hour"},
+          new String[] {"DET", "NOUN", "VERB", "DET", "NOUN"});
+    }
+  }
+
   /** Every example file is loaded by some test above; a new file needs its own test. */
   public void testEveryExampleFileIsCovered() throws IOException {
     List<String> files = new ArrayList<>();
@@ -100,8 +116,9 @@ public class LuceneChainExamplesTest extends BaseTokenStreamTestCase {
     }
     files.sort(null);
     assertEquals(
-        List.of("classes-as-types.properties", "index-payloads.properties", "qualified-terms.properties",
-            "tag-payloads.properties", "weight-payloads.properties"),
+        List.of("classes-as-types.properties", "hiking-lexicon.txt", "index-payloads.properties",
+            "qualified-terms.properties", "tag-payloads.properties", "user-lexicon.properties",
+            "weight-payloads.properties"),
         files);
   }
 

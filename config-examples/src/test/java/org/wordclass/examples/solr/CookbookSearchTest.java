@@ -22,7 +22,8 @@ import org.junit.Test;
 /**
  * The demo config set in a real Solr core: a community cookbook's notes, searched by the word
  * class of "book" (to book a hall, a recipe book) with standard Solr query syntax only, and the
- * analysis screen showing each token's class and confidence.
+ * analysis screen showing each token's class and confidence; and the config set's user lexicon
+ * correcting the model where the cookbook's words mean something else.
  */
 public class CookbookSearchTest extends SolrTestCaseJ4 {
   /** Id, title, note; the comment says what the bundled model makes of "book" in it. */
@@ -33,6 +34,8 @@ public class CookbookSearchTest extends SolrTestCaseJ4 {
     {"k4", "New arrivals", "This book has forty recipes for bread"}, // NOUN
     {"k5", "Tasting table", "You can book a place at the table"}, // VERB
     {"s1", "Sauce club", "They taste the sauce before they serve it"}, // no "book"
+    {"c1", "Kitchen rota", "The cook tastes the broth"}, // "cook": VERB, NOUN with the cookbook's lexicon
+    {"c2", "Sunday lunch", "Baste the roast every hour"}, // "Baste": PROPN, "roast": ADJ; fixed the same way
   };
   private static final Set<String> BOOK_VERB = Set.of("k1", "k3", "k5");
   private static final Set<String> BOOK_NOUN = Set.of("k2", "k4");
@@ -172,6 +175,38 @@ public class CookbookSearchTest extends SolrTestCaseJ4 {
       }
     }
     assertEquals(List.of("book", "book_verb"), book);
+  }
+
+  // (e) the config set's user lexicon
+
+  @Test
+  public void userLexiconMakesTheCookAPerson() throws Exception {
+    // the bundled model's reading, in the field without the lexicon
+    assertEquals(Set.of("c1"), idSet(search("q", "body_classed:cook_verb")));
+    assertEquals(Set.of("c1"), idSet(search("q", "body_kitchen:cook_noun")));
+    assertTrue(search("q", "body_kitchen:cook_verb").isEmpty());
+  }
+
+  @Test
+  public void userLexiconLeavesTheChoiceBetweenListedClassesToTheContext() throws Exception {
+    assertEquals(List.of("PROPN", "ADJ"), typesOf("body_classed", "Baste the roast every hour", "baste", "roast"));
+    assertEquals(List.of("VERB", "NOUN"), typesOf("body_kitchen", "Baste the roast every hour", "baste", "roast"));
+    assertEquals(List.of("VERB"), typesOf("body_kitchen", "We roast the peppers", "roast"));
+    assertEquals(Set.of("c2"), idSet(search("q", "body_kitchen:roast_noun AND body_kitchen:baste_verb")));
+  }
+
+  /** The classes of the qualified terms of {@code words} (lowercased), in order. */
+  private static List<String> typesOf(String field, String text, String... words) throws Exception {
+    List<String> types = new ArrayList<>();
+    for (String word : words) {
+      for (Map<String, Object> token : analyze(field, text)) {
+        String term = (String) token.get("text");
+        if (term.startsWith(word + "_")) {
+          types.add((String) token.get("type"));
+        }
+      }
+    }
+    return types;
   }
 
   // helpers

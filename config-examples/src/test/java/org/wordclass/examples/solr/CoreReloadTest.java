@@ -48,6 +48,9 @@ public class CoreReloadTest extends SolrTestCaseJ4 {
   @Test
   public void fieldTypesNamingOneFileShareOneModel() {
     assertSame(solr.modelOf("text_wordclass_classed"), solr.modelOf("text_wordclass_weighted"));
+    // the one with the user lexicon is a model of its own, made from the shared one
+    assertNotSame(solr.modelOf("text_wordclass_classed"), solr.modelOf("text_wordclass_kitchen"));
+    assertEquals("cookbook.txt", solr.modelOf("text_wordclass_kitchen").provenance().get("lexicon.file"));
     assertSame(DefaultModel.get(), solr.modelOf("text_wordclass"));
   }
 
@@ -55,6 +58,7 @@ public class CoreReloadTest extends SolrTestCaseJ4 {
   public void reloadsReuseTheModelAndDoNotGrowTheHeap() throws Exception {
     HmmModel fromConf = solr.modelOf("text_wordclass_classed");
     HmmModel bundled = solr.modelOf("text_wordclass");
+    HmmModel withLexicon = solr.modelOf("text_wordclass_kitchen");
     reload(); // the first reload warms caches and classes that any reload needs once
 
     long before = usedHeapAfterGc();
@@ -66,6 +70,7 @@ public class CoreReloadTest extends SolrTestCaseJ4 {
       assertSame("reload " + i + " read the model of conf/ again", fromConf, solr.modelOf("text_wordclass_classed"));
       assertSame(fromConf, solr.modelOf("text_wordclass_weighted"));
       assertSame(bundled, solr.modelOf("text_wordclass"));
+      assertSame("reload " + i + " applied the lexicon again", withLexicon, solr.modelOf("text_wordclass_kitchen"));
     }
     long reloadMillis = (System.nanoTime() - started) / 1_000_000;
     long after = usedHeapAfterGc();
