@@ -20,7 +20,7 @@ if [[ $# -gt 0 && "$1" != -* ]]; then filter="$1"; shift; fi
 out="$here/target/jmh-$mode.json"
 # single-shot training runs take their warm-up and measurement counts from the same options;
 # the heap settings are the same for every fork so that no benchmark is favoured
-java -jar "$jar" "$filter" "${timing[@]}" -jvmArgs "-Xms1g -Xmx1g" -rf json -rff "$out" "$@"
+java -jar "$jar" "$filter" "${timing[@]}" -jvmArgs "-Xms1g -Xmx1g" -foe true -rf json -rff "$out" "$@"
 echo
 # JOL sizes records through the instrumentation agent it attaches to its own JVM
 java -Djdk.attach.allowAttachSelf=true -Xms1g -Xmx1g -cp "$jar" org.wordclass.benchmarks.ModelHeap

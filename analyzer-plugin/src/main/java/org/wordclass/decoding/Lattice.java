@@ -211,6 +211,11 @@ public final class Lattice {
     return pairStart[position];
   }
 
+  /** The flat candidate states; those of a position start at {@link #candidateOffset}. */
+  int[] candidateStates() {
+    return candidateState;
+  }
+
   double[] pairLogEmissions() {
     return pairLogEmission;
   }

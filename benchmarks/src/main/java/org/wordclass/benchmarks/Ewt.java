@@ -3,6 +3,7 @@ package org.wordclass.benchmarks;
 import java.io.IOException;
 import java.io.StringReader;
 import java.io.UncheckedIOException;
+import java.net.URISyntaxException;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
@@ -32,14 +33,15 @@ public final class Ewt {
 
   /**
    * The treebank file: under the system property {@code wordclass.corpora} if set, else under
-   * {@code shared/corpora} in the working directory or the nearest parent that has one (the
-   * checkout sits beside {@code shared/}, and JMH forks keep the working directory).
+   * {@code shared/corpora} in the nearest folder, going up from the working directory and then
+   * from this jar, that has one (the checkout sits beside {@code shared/}).
    */
   static Path file(String name) {
     String configured = System.getProperty("wordclass.corpora");
+    Path relative = Paths.get(FOLDER, name);
     Path path = configured != null && !configured.isBlank()
-        ? Paths.get(configured, FOLDER, name)
-        : searchUpwards(Paths.get("").toAbsolutePath(), name);
+        ? Paths.get(configured).resolve(relative)
+        : searchUpwards(relative, Paths.get("").toAbsolutePath(), codeLocation());
     if (!Files.isRegularFile(path)) {
       throw new IllegalStateException("benchmark input " + path + " not found: the benchmarks need the UD English EWT "
           + "treebank in ../shared/corpora (or set -Dwordclass.corpora=FOLDER)");
@@ -47,14 +49,25 @@ public final class Ewt {
     return path;
   }
 
-  private static Path searchUpwards(Path start, String name) {
-    for (Path dir = start; dir != null; dir = dir.getParent()) {
-      Path candidate = dir.resolve("shared").resolve("corpora").resolve(FOLDER).resolve(name);
-      if (Files.isRegularFile(candidate)) {
-        return candidate;
+  /** The first {@code shared/corpora/relative} found above any of {@code starts}, else where the first would be. */
+  private static Path searchUpwards(Path relative, Path... starts) {
+    for (Path start : starts) {
+      for (Path dir = start; dir != null; dir = dir.getParent()) {
+        Path candidate = dir.resolve("shared").resolve("corpora").resolve(relative);
+        if (Files.isRegularFile(candidate)) {
+          return candidate;
+        }
       }
     }
-    return start.resolveSibling("shared").resolve("corpora").resolve(FOLDER).resolve(name);
+    return starts[0].resolveSibling("shared").resolve("corpora").resolve(relative);
+  }
+
+  private static Path codeLocation() {
+    try {
+      return Paths.get(Ewt.class.getProtectionDomain().getCodeSource().getLocation().toURI()).toAbsolutePath();
+    } catch (URISyntaxException | RuntimeException e) {
+      return Paths.get("").toAbsolutePath();
+    }
   }
 
   /** The {@code # text =} lines of the test set: one raw sentence each. */
