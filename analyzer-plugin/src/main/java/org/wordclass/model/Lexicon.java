@@ -55,6 +55,14 @@ public final class Lexicon {
   private final short[] contextState;
   private final float[] contextLogEmission;
   private final boolean[] hasContexts;
+  /**
+   * The context emissions again, as one dense row per word/state pair that has any, indexed by
+   * the previous state (NaN where unseen): decoding reads one per (previous, current) candidate
+   * pair, and a direct read there costs far less than a binary search. Built at load time.
+   */
+  private final int[] contextRow;
+  private final int contextWidth;
+  private final float[] denseContext;
 
   /** Builds a lexicon; entries must have distinct words. */
   public Lexicon(List<Entry> entries) {
@@ -108,6 +116,36 @@ public final class Lexicon {
       insert(w);
     }
     contextStart[t] = x;
+    contextWidth = maxContextState() + 1;
+    contextRow = new int[totalTags];
+    denseContext = new float[denseRows() * contextWidth];
+    fillDenseContexts();
+  }
+
+  private int maxContextState() {
+    int max = -1;
+    for (short s : contextState) {
+      max = Math.max(max, s);
+    }
+    return max;
+  }
+
+  /** Numbers the pairs that have contexts, -1 for the others; returns how many have. */
+  private int denseRows() {
+    int rows = 0;
+    for (int p = 0; p < contextRow.length; p++) {
+      contextRow[p] = contextStart[p + 1] > contextStart[p] ? contextWidth * rows++ : -1;
+    }
+    return rows;
+  }
+
+  private void fillDenseContexts() {
+    Arrays.fill(denseContext, Float.NaN);
+    for (int p = 0; p < contextRow.length; p++) {
+      for (int x = contextStart[p]; x < contextStart[p + 1]; x++) {
+        denseContext[contextRow[p] + contextState[x]] = contextLogEmission[x];
+      }
+    }
   }
 
   private static int tableSize(int words) {
@@ -206,21 +244,22 @@ public final class Lexicon {
    * previous}, or NaN if that context was not seen with the word.
    */
   public float contextLogEmission(int word, int k, int previous) {
-    int pair = tagStart[word] + k;
-    int from = contextStart[pair];
-    int to = contextStart[pair + 1];
-    while (from < to) {
-      int mid = (from + to) >>> 1;
-      int s = contextState[mid];
-      if (s < previous) {
-        from = mid + 1;
-      } else if (s > previous) {
-        to = mid;
-      } else {
-        return contextLogEmission[mid];
-      }
-    }
-    return Float.NaN;
+    int row = contextRow(word, k);
+    return row < 0 ? Float.NaN : contextLogEmissionInRow(row, previous);
+  }
+
+  /**
+   * The row of context emissions of the word's {@code k}-th state, for {@link
+   * #contextLogEmissionInRow}, or -1 if no context was kept for it: a decoder looks it up once
+   * per candidate and then reads one value per previous state.
+   */
+  public int contextRow(int word, int k) {
+    return contextRow[tagStart[word] + k];
+  }
+
+  /** The emission in {@code row} right after state {@code previous}, or NaN if that context was not seen. */
+  public float contextLogEmissionInRow(int row, int previous) {
+    return previous < contextWidth ? denseContext[row + previous] : Float.NaN;
   }
 
   /** Total number of word/context/state triples with their own emission. */
@@ -272,7 +311,7 @@ public final class Lexicon {
   /** Approximate heap size in bytes. */
   public long ramBytesUsed() {
     return 2L * chars.length + 4L * (wordStart.length + slots.length + tagStart.length) + 10L * tagIds.length
-        + 6L * contextState.length + words();
+        + 6L * contextState.length + words() + 4L * (contextRow.length + denseContext.length);
   }
 
   private int words() {
