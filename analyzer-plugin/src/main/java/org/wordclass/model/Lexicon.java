@@ -47,6 +47,8 @@ public final class Lexicon {
   private final char[] chars;
   private final int[] wordStart;
   private final int[] slots;
+  /** The full hash of the word in each slot, so a probe compares characters only on a likely match. */
+  private final int[] slotHash;
   private final int[] tagStart;
   private final short[] tagIds;
   private final float[] logEmissions;
@@ -87,6 +89,7 @@ public final class Lexicon {
     tagIds = new short[totalTags];
     logEmissions = new float[totalTags];
     slots = new int[tableSize(words)];
+    slotHash = new int[slots.length];
     Arrays.fill(slots, -1);
     int c = 0;
     int t = 0;
@@ -160,14 +163,16 @@ public final class Lexicon {
     int start = wordStart[word];
     int len = wordStart[word + 1] - start;
     int mask = slots.length - 1;
-    int slot = hash(chars, start, len) & mask;
+    int h = hash(chars, start, len);
+    int slot = h & mask;
     while (slots[slot] >= 0) {
-      if (equalsWord(slots[slot], chars, start, len)) {
+      if (slotHash[slot] == h && equalsWord(slots[slot], chars, start, len)) {
         throw new IllegalArgumentException("duplicate word in lexicon: " + word(word));
       }
       slot = (slot + 1) & mask;
     }
     slots[slot] = word;
+    slotHash[slot] = h;
   }
 
   private static int hash(char[] buf, int off, int len) {
@@ -184,21 +189,28 @@ public final class Lexicon {
     return h;
   }
 
+  /** A plain loop: words are short, and this beats the setup of a vectorised comparison. */
   private boolean equalsWord(int word, char[] buf, int off, int len) {
     int start = wordStart[word];
     if (wordStart[word + 1] - start != len) {
       return false;
     }
-    return Arrays.equals(chars, start, start + len, buf, off, off + len);
+    for (int i = 0; i < len; i++) {
+      if (chars[start + i] != buf[off + i]) {
+        return false;
+      }
+    }
+    return true;
   }
 
   /** Id of the word {@code buf[off..off+len)}, or -1 if it is not in the lexicon. */
   public int lookup(char[] buf, int off, int len) {
     int mask = slots.length - 1;
-    int slot = hash(buf, off, len) & mask;
+    int h = hash(buf, off, len);
+    int slot = h & mask;
     int word;
     while ((word = slots[slot]) >= 0) {
-      if (equalsWord(word, buf, off, len)) {
+      if (slotHash[slot] == h && equalsWord(word, buf, off, len)) {
         return word;
       }
       slot = (slot + 1) & mask;
@@ -310,7 +322,7 @@ public final class Lexicon {
 
   /** Approximate heap size in bytes. */
   public long ramBytesUsed() {
-    return 2L * chars.length + 4L * (wordStart.length + slots.length + tagStart.length) + 10L * tagIds.length
+    return 2L * chars.length + 4L * (wordStart.length + 2 * slots.length + tagStart.length) + 10L * tagIds.length
         + 6L * contextState.length + words() + 4L * (contextRow.length + denseContext.length);
   }
 
