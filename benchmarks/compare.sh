@@ -1,7 +1,9 @@
 #!/usr/bin/env bash
 # Measures builds side by side in one session: runs the same JMH selection against each jar in
 # turn, several rounds interleaved (A B C A B C ...), so that load from other users of the
-# machine falls on all of them alike, then prints each jar's scores and its median over the first.
+# machine falls on all of them alike, then prints each jar's scores, their median and best, and
+# both over those of the first jar. On a shared machine other load only ever slows a run down,
+# so the best of several short runs is the steadier figure.
 #   benchmarks/compare.sh ROUNDS JAR... -- JMH ARGS
 # e.g. keep the jar of the commit before a change, then
 #   benchmarks/compare.sh 3 /tmp/before.jar benchmarks/target/benchmarks.jar -- \
@@ -36,7 +38,8 @@ def scores(j):
 base = scores(0)
 for j in range(n):
     for name, values in scores(j).items():
-        median = statistics.median(values)
-        ratio = median / statistics.median(base[name])
-        print(f"{jars[j]}  {name}  median {median:,.1f}  runs {', '.join(f'{v:,.0f}' for v in values)}  x{ratio:.2f}")
+        median, best = statistics.median(values), max(values)
+        print(f"{jars[j]}  {name}  runs {', '.join(f'{v:,.0f}' for v in values)}"
+              f"  median {median:,.0f} x{median / statistics.median(base[name]):.2f}"
+              f"  best {best:,.0f} x{best / max(base[name]):.2f}")
 PY

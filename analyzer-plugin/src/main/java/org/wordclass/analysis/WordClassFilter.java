@@ -92,7 +92,13 @@ public final class WordClassFilter extends TokenFilter {
   /** Copies of buffered tokens; while {@link #carried}, {@code slots[windowSize]} holds the next window's first. */
   private AttributeSource[] slots = new AttributeSource[0];
   private CharTermAttribute[] slotTerms = new CharTermAttribute[0];
-  private int pooledAttributeCount;
+  /**
+   * This stream's attribute implementations and, per slot, their clones in the same order, so
+   * that saving and restoring a token copies impl to impl directly; {@link
+   * AttributeSource#copyTo} would look every target impl up by class, twice per token.
+   */
+  private AttributeImpl[] liveImpls = new AttributeImpl[0];
+  private AttributeImpl[][] slotImpls = new AttributeImpl[0][];
   private int[] best = new int[64];
 
   private int windowSize;
@@ -180,7 +186,10 @@ public final class WordClassFilter extends TokenFilter {
 
   /** Restores buffered token {@code i} and sets its class. */
   private void emit(int i) {
-    slots[i].copyTo(this);
+    AttributeImpl[] saved = slotImpls[i];
+    for (int a = 0; a < saved.length; a++) {
+      saved[a].copyTo(liveImpls[a]);
+    }
     int tag = lattice.candidateTag(i, best[i]);
     String name = tags.name(tag);
     double confidence = options.confidence() ? decoder.tagPosterior(i, best[i]) : Double.NaN;
@@ -208,12 +217,30 @@ public final class WordClassFilter extends TokenFilter {
       int grown = Math.min(Math.max(i + 1, slots.length * 2), options.maxWindow());
       slots = Arrays.copyOf(slots, grown);
       slotTerms = Arrays.copyOf(slotTerms, grown);
+      slotImpls = Arrays.copyOf(slotImpls, grown);
     }
     if (slots[i] == null) {
       slots[i] = cloneAttributes();
       slotTerms[i] = slots[i].getAttribute(CharTermAttribute.class);
+      slotImpls[i] = impls(slots[i]);
     }
-    copyTo(slots[i]);
+    AttributeImpl[] saved = slotImpls[i];
+    for (int a = 0; a < saved.length; a++) {
+      liveImpls[a].copyTo(saved[a]);
+    }
+  }
+
+  /** The impls of {@code source} in iteration order, which {@link #cloneAttributes} keeps. */
+  private AttributeImpl[] impls(AttributeSource source) {
+    AttributeImpl[] impls = new AttributeImpl[liveImpls.length];
+    Iterator<AttributeImpl> it = source.getAttributeImplsIterator();
+    for (int a = 0; a < impls.length; a++) {
+      impls[a] = it.next();
+      if (impls[a].getClass() != liveImpls[a].getClass()) {
+        throw new IllegalStateException("a clone of the token's attributes lists them in another order");
+      }
+    }
+    return impls;
   }
 
   private void swapSlots(int a, int b) {
@@ -223,6 +250,9 @@ public final class WordClassFilter extends TokenFilter {
     CharTermAttribute term = slotTerms[a];
     slotTerms[a] = slotTerms[b];
     slotTerms[b] = term;
+    AttributeImpl[] impls = slotImpls[a];
+    slotImpls[a] = slotImpls[b];
+    slotImpls[b] = impls;
   }
 
   @Override
@@ -244,10 +274,15 @@ public final class WordClassFilter extends TokenFilter {
     for (Iterator<AttributeImpl> it = getAttributeImplsIterator(); it.hasNext(); it.next()) {
       count++;
     }
-    if (count != pooledAttributeCount) {
+    if (count != liveImpls.length) {
       Arrays.fill(slots, null);
       Arrays.fill(slotTerms, null);
-      pooledAttributeCount = count;
+      Arrays.fill(slotImpls, null);
+      liveImpls = new AttributeImpl[count];
+      Iterator<AttributeImpl> it = getAttributeImplsIterator();
+      for (int a = 0; a < count; a++) {
+        liveImpls[a] = it.next();
+      }
     }
   }
 }

@@ -10,10 +10,10 @@ import org.apache.lucene.analysis.custom.CustomAnalyzer;
  * lower-casing, with or without the word-class filter (bundled model, its own order, no
  * confidences) in between, where the filter belongs.
  */
-final class Chains {
+public final class Chains {
   private Chains() {}
 
-  static Analyzer build(boolean wordClass) {
+  public static Analyzer build(boolean wordClass) {
     try {
       CustomAnalyzer.Builder builder = CustomAnalyzer.builder().withTokenizer("standard");
       if (wordClass) {
