@@ -27,8 +27,8 @@ public final class Report {
       String name = shortName(r) + " " + params(r);
       byName.put(name, r);
       System.out.printf(Locale.ROOT, "| %s | %s | %s | %s |%n", shortName(r), params(r),
-          scoreText(r.path("primaryMetric")), r.path("secondaryMetrics").has(TOKENS)
-              ? scoreText(r.path("secondaryMetrics").path(TOKENS)) : "");
+          scoreText(r.path("primaryMetric"), r.path("primaryMetric").path("scoreUnit").asText()),
+          r.path("secondaryMetrics").has(TOKENS) ? scoreText(r.path("secondaryMetrics").path(TOKENS), "tokens/s") : "");
     }
     System.out.println();
     System.out.println("| ratio | value |");
@@ -75,10 +75,10 @@ public final class Report {
     return s.toString();
   }
 
-  private static String scoreText(JsonNode metric) {
+  /** Score and error in {@code unit} (JMH calls every auxiliary rate ops/s). */
+  private static String scoreText(JsonNode metric, String unit) {
     double score = metric.path("score").asDouble();
     double error = metric.path("scoreError").asDouble(Double.NaN);
-    String unit = metric.path("scoreUnit").asText();
     return Double.isNaN(error)
         ? String.format(Locale.ROOT, "%,.1f %s", score, unit)
         : String.format(Locale.ROOT, "%,.1f ± %,.1f %s", score, error, unit);

@@ -39,6 +39,8 @@ class BenchmarksSmokeTest {
         .measurementTime(TimeValue.milliseconds(1))
         .param("share", "8")
         .shouldFailOnError(true)
+        // JMH's progress report would fill the build log; it is kept beside the test reports
+        .output("target/jmh-smoke.log")
         .build();
     Collection<RunResult> results = new Runner(options).run();
     Set<String> ran = new TreeSet<>();
