@@ -65,8 +65,9 @@ import org.wordclass.model.TagSet;
  *
  * Viterbi costs O(K<sup>2</sup>) per token at order 1 and O(K<sup>3</sup>) at order 2, for K
  * candidate classes (one or two for most known words, all open classes for unknown words). With
- * the bundled English model on ordinary prose that is roughly 0.4 microseconds per token at order
- * 1 and 0.6 at order 2; confidence (a forward-backward pass) about triples it. Memory is bounded
+ * the bundled English model on web text the decoder takes roughly 0.25 microseconds per token at
+ * order 1 and 0.4 at order 2; confidence (a forward-backward pass) about doubles it (figures and
+ * method in docs/performance.md). Memory is bounded
  * by the window: one pooled copy of the token's attributes per buffered token, kept for the life
  * of the filter, plus the decoder's buffers, a few kilobytes per token of the window at most.
  * Steady-state filtering allocates nothing per token, unless upstream payloads must be copied.
@@ -92,7 +93,13 @@ public final class WordClassFilter extends TokenFilter {
   /** Copies of buffered tokens; while {@link #carried}, {@code slots[windowSize]} holds the next window's first. */
   private AttributeSource[] slots = new AttributeSource[0];
   private CharTermAttribute[] slotTerms = new CharTermAttribute[0];
-  private int pooledAttributeCount;
+  /**
+   * This stream's attribute implementations and, per slot, their clones in the same order, so
+   * that saving and restoring a token copies impl to impl directly; {@link
+   * AttributeSource#copyTo} would look every target impl up by class, twice per token.
+   */
+  private AttributeImpl[] liveImpls = new AttributeImpl[0];
+  private AttributeImpl[][] slotImpls = new AttributeImpl[0][];
   private int[] best = new int[64];
 
   private int windowSize;
@@ -187,7 +194,10 @@ public final class WordClassFilter extends TokenFilter {
 
   /** Restores buffered token {@code i} and sets its class. */
   private void emit(int i) {
-    slots[i].copyTo(this);
+    AttributeImpl[] saved = slotImpls[i];
+    for (int a = 0; a < saved.length; a++) {
+      saved[a].copyTo(liveImpls[a]);
+    }
     int tag = lattice.candidateTag(i, best[i]);
     String name = tags.name(tag);
     double confidence = options.confidence() ? decoder.tagPosterior(i, best[i]) : Double.NaN;
@@ -215,12 +225,30 @@ public final class WordClassFilter extends TokenFilter {
       int grown = Math.min(Math.max(i + 1, slots.length * 2), options.maxWindow());
       slots = Arrays.copyOf(slots, grown);
       slotTerms = Arrays.copyOf(slotTerms, grown);
+      slotImpls = Arrays.copyOf(slotImpls, grown);
     }
     if (slots[i] == null) {
       slots[i] = cloneAttributes();
       slotTerms[i] = slots[i].getAttribute(CharTermAttribute.class);
+      slotImpls[i] = impls(slots[i]);
     }
-    copyTo(slots[i]);
+    AttributeImpl[] saved = slotImpls[i];
+    for (int a = 0; a < saved.length; a++) {
+      liveImpls[a].copyTo(saved[a]);
+    }
+  }
+
+  /** The impls of {@code source} in iteration order, which {@link #cloneAttributes} keeps. */
+  private AttributeImpl[] impls(AttributeSource source) {
+    AttributeImpl[] impls = new AttributeImpl[liveImpls.length];
+    Iterator<AttributeImpl> it = source.getAttributeImplsIterator();
+    for (int a = 0; a < impls.length; a++) {
+      impls[a] = it.next();
+      if (impls[a].getClass() != liveImpls[a].getClass()) {
+        throw new IllegalStateException("a clone of the token's attributes lists them in another order");
+      }
+    }
+    return impls;
   }
 
   private void swapSlots(int a, int b) {
@@ -230,6 +258,9 @@ public final class WordClassFilter extends TokenFilter {
     CharTermAttribute term = slotTerms[a];
     slotTerms[a] = slotTerms[b];
     slotTerms[b] = term;
+    AttributeImpl[] impls = slotImpls[a];
+    slotImpls[a] = slotImpls[b];
+    slotImpls[b] = impls;
   }
 
   @Override
@@ -251,10 +282,15 @@ public final class WordClassFilter extends TokenFilter {
     for (Iterator<AttributeImpl> it = getAttributeImplsIterator(); it.hasNext(); it.next()) {
       count++;
     }
-    if (count != pooledAttributeCount) {
+    if (count != liveImpls.length) {
       Arrays.fill(slots, null);
       Arrays.fill(slotTerms, null);
-      pooledAttributeCount = count;
+      Arrays.fill(slotImpls, null);
+      liveImpls = new AttributeImpl[count];
+      Iterator<AttributeImpl> it = getAttributeImplsIterator();
+      for (int a = 0; a < count; a++) {
+        liveImpls[a] = it.next();
+      }
     }
   }
 }

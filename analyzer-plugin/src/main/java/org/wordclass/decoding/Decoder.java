@@ -18,6 +18,9 @@ import org.wordclass.model.HmmModel;
  * <p>Not thread-safe: one per thread; the model it reads is shared.
  */
 public final class Decoder {
+  /** Score of the single virtual state before the first token. */
+  private static final double[] START_SCORE = {0};
+
   private final HmmModel model;
   private final int order;
   private final Lattice lattice;
@@ -27,6 +30,7 @@ public final class Decoder {
   private final double[] logTrigram;
   private final double[] bigram;
   private final double[] trigram;
+  private final int[] boundaryState;
 
   private int[] stateStart = new int[65];
   private double[] score = new double[1024];
@@ -58,6 +62,7 @@ public final class Decoder {
     this.logTrigram = model.logTrigramTable();
     this.bigram = model.bigramTable();
     this.trigram = model.trigramTable();
+    this.boundaryState = new int[] {boundary};
   }
 
   public HmmModel model() {
@@ -78,14 +83,22 @@ public final class Decoder {
     return position < 0 ? 1 : lattice.candidateCount(position);
   }
 
+  /**
+   * The array holding the candidate states of {@code position} from {@link #statesFrom}: the
+   * lattice's, or the boundary alone for the virtual positions before the sequence. Inner loops
+   * index it directly instead of testing the position per candidate.
+   */
+  private int[] statesAt(int position) {
+    return position < 0 ? boundaryState : lattice.candidateStates();
+  }
+
+  private int statesFrom(int position) {
+    return position < 0 ? 0 : lattice.candidateOffset(position);
+  }
+
   /** The state of candidate {@code k}, or the boundary before the sequence. */
   private int tagAt(int position, int k) {
     return position < 0 ? boundary : lattice.candidateState(position, k);
-  }
-
-  /** Emission of candidate k at {@code position} after candidate j of the position before. */
-  private double logEmission(int position, int j, int k) {
-    return lattice.logEmission(position, j, k);
   }
 
   /** Lays out one state per (previous candidate, candidate) pair (order 2) or per candidate (order 1). */
@@ -147,17 +160,24 @@ public final class Decoder {
   }
 
   private void viterbiFirstOrder(int[] best, int n) {
+    double[] emissions = lattice.pairLogEmissions();
+    int[] current = lattice.candidateStates();
     for (int i = 0; i < n; i++) {
       int kp = count(i - 1);
       int kc = count(i);
       int here = stateStart[i];
+      double[] prevScore = i == 0 ? START_SCORE : score;
       int prev = i == 0 ? 0 : stateStart[i - 1];
+      int[] previous = statesAt(i - 1);
+      int po = statesFrom(i - 1);
+      int co = lattice.candidateOffset(i);
+      int emit = lattice.pairOffset(i);
       for (int k = 0; k < kc; k++) {
-        int tk = tagAt(i, k);
+        int tk = current[co + k];
         double top = Double.NEGATIVE_INFINITY;
         int arg = 0;
         for (int j = 0; j < kp; j++) {
-          double s = (i == 0 ? 0 : score[prev + j]) + logBigram[tagAt(i - 1, j) * states + tk] + logEmission(i, j, k);
+          double s = prevScore[prev + j] + logBigram[previous[po + j] * states + tk] + emissions[emit + j * kc + k];
           if (s > top) {
             top = s;
             arg = j;
@@ -185,27 +205,37 @@ public final class Decoder {
   }
 
   private void viterbiSecondOrder(int[] best, int n) {
+    double[] emissions = lattice.pairLogEmissions();
+    int[] current = lattice.candidateStates();
+    int plane = states * states;
     for (int i = 0; i < n; i++) {
       int kpp = count(i - 2);
       int kp = count(i - 1);
       int kc = count(i);
       int here = stateStart[i];
+      double[] prevScore = i == 0 ? START_SCORE : score;
       int prev = i == 0 ? 0 : stateStart[i - 1];
+      int[] first = statesAt(i - 2);
+      int fo = statesFrom(i - 2);
+      int[] previous = statesAt(i - 1);
+      int po = statesFrom(i - 1);
+      int co = lattice.candidateOffset(i);
+      int emit = lattice.pairOffset(i);
       for (int j = 0; j < kp; j++) {
-        int tj = tagAt(i - 1, j);
+        int tj = previous[po + j];
         for (int k = 0; k < kc; k++) {
-          int tk = tagAt(i, k);
+          // (th * states + tj) * states + tk, with the part that does not depend on h taken out
+          int last = tj * states + current[co + k];
           double top = Double.NEGATIVE_INFINITY;
           int arg = 0;
           for (int h = 0; h < kpp; h++) {
-            double s = (i == 0 ? 0 : score[prev + h * kp + j])
-                + logTrigram[(tagAt(i - 2, h) * states + tj) * states + tk];
+            double s = prevScore[prev + h * kp + j] + logTrigram[first[fo + h] * plane + last];
             if (s > top) {
               top = s;
               arg = h;
             }
           }
-          score[here + j * kc + k] = top + logEmission(i, j, k);
+          score[here + j * kc + k] = top + emissions[emit + j * kc + k];
           backPointer[here + j * kc + k] = arg;
         }
       }

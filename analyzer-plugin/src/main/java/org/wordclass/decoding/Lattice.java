@@ -37,6 +37,8 @@ public final class Lattice {
   private boolean foundLowerCased;
   private int[] pairStart = new int[65];
   private double[] pairLogEmission = new double[1024];
+  private int[] contextRowOf = new int[32];
+  private double[] plainOf = new double[32];
 
   public Lattice(HmmModel model) {
     this.model = model;
@@ -188,20 +190,36 @@ public final class Lattice {
       pairLogEmission = Arrays.copyOf(pairLogEmission, Math.max(end, 2 * pairLogEmission.length));
     }
     pairStart[position + 1] = end;
+    prepareContexts(position, here);
+    for (int j = 0; j < previous; j++) {
+      int previousState = position == 0 ? model.boundary() : candidateState(position - 1, j);
+      int row = start + j * here;
+      for (int k = 0; k < here; k++) {
+        int context = contextRowOf[k];
+        float c = context < 0 ? Float.NaN : model.lexicon().contextLogEmissionInRow(context, previousState);
+        pairLogEmission[row + k] = Float.isNaN(c) ? plainOf[k] : c;
+      }
+    }
+  }
+
+  /**
+   * Per candidate of {@code position}, once rather than per previous candidate: its row of
+   * context emissions (-1 if none) and the emission used where the context was not seen, which
+   * for a word with contexts carries the model's unseen-context weight.
+   */
+  private void prepareContexts(int position, int here) {
+    if (contextRowOf.length < here) {
+      contextRowOf = new int[Math.max(here, 2 * contextRowOf.length)];
+      plainOf = new double[contextRowOf.length];
+    }
     int word = wordId[position];
     boolean contexts = word >= 0 && model.lexicon().hasContexts(word);
     double unseen = model.cues().unseenContextLogWeight();
     int first = candidateStart[position];
-    for (int j = 0; j < previous; j++) {
-      int previousState = position == 0 ? model.boundary() : candidateState(position - 1, j);
-      for (int k = 0; k < here; k++) {
-        double e = candidateLogEmission[first + k];
-        if (contexts) {
-          float c = model.lexicon().contextLogEmission(word, candidateEntry[first + k], previousState);
-          e = Float.isNaN(c) ? e + unseen : c;
-        }
-        pairLogEmission[start + j * here + k] = e;
-      }
+    for (int k = 0; k < here; k++) {
+      double e = candidateLogEmission[first + k];
+      contextRowOf[k] = contexts ? model.lexicon().contextRow(word, candidateEntry[first + k]) : -1;
+      plainOf[k] = contexts ? e + unseen : e;
     }
   }
 
@@ -267,6 +285,11 @@ public final class Lattice {
   /** First index of the emissions of {@code position} in the flat pair array. */
   int pairOffset(int position) {
     return pairStart[position];
+  }
+
+  /** The flat candidate states; those of a position start at {@link #candidateOffset}. */
+  int[] candidateStates() {
+    return candidateState;
   }
 
   double[] pairLogEmissions() {

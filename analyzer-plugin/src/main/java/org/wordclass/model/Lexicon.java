@@ -48,6 +48,8 @@ public final class Lexicon {
   private final char[] chars;
   private final int[] wordStart;
   private final int[] slots;
+  /** The full hash of the word in each slot, so a probe compares characters only on a likely match. */
+  private final int[] slotHash;
   private final int[] tagStart;
   private final short[] tagIds;
   private final float[] logEmissions;
@@ -58,6 +60,14 @@ public final class Lexicon {
   private final boolean[] hasContexts;
   /** Per word: listed by a user lexicon; null when no word is. */
   private final boolean[] userListed;
+  /**
+   * The context emissions again, as one dense row per word/state pair that has any, indexed by
+   * the previous state (NaN where unseen): decoding reads one per (previous, current) candidate
+   * pair, and a direct read there costs far less than a binary search. Built at load time.
+   */
+  private final int[] contextRow;
+  private final int contextWidth;
+  private final float[] denseContext;
 
   /** Builds a lexicon; entries must have distinct words. */
   public Lexicon(List<Entry> entries) {
@@ -94,6 +104,7 @@ public final class Lexicon {
     tagIds = new short[totalTags];
     logEmissions = new float[totalTags];
     slots = new int[tableSize(words)];
+    slotHash = new int[slots.length];
     Arrays.fill(slots, -1);
     int c = 0;
     int t = 0;
@@ -123,6 +134,36 @@ public final class Lexicon {
       insert(w);
     }
     contextStart[t] = x;
+    contextWidth = maxContextState() + 1;
+    contextRow = new int[totalTags];
+    denseContext = new float[denseRows() * contextWidth];
+    fillDenseContexts();
+  }
+
+  private int maxContextState() {
+    int max = -1;
+    for (short s : contextState) {
+      max = Math.max(max, s);
+    }
+    return max;
+  }
+
+  /** Numbers the pairs that have contexts, -1 for the others; returns how many have. */
+  private int denseRows() {
+    int rows = 0;
+    for (int p = 0; p < contextRow.length; p++) {
+      contextRow[p] = contextStart[p + 1] > contextStart[p] ? contextWidth * rows++ : -1;
+    }
+    return rows;
+  }
+
+  private void fillDenseContexts() {
+    Arrays.fill(denseContext, Float.NaN);
+    for (int p = 0; p < contextRow.length; p++) {
+      for (int x = contextStart[p]; x < contextStart[p + 1]; x++) {
+        denseContext[contextRow[p] + contextState[x]] = contextLogEmission[x];
+      }
+    }
   }
 
   private static int tableSize(int words) {
@@ -137,14 +178,16 @@ public final class Lexicon {
     int start = wordStart[word];
     int len = wordStart[word + 1] - start;
     int mask = slots.length - 1;
-    int slot = hash(chars, start, len) & mask;
+    int h = hash(chars, start, len);
+    int slot = h & mask;
     while (slots[slot] >= 0) {
-      if (equalsWord(slots[slot], chars, start, len)) {
+      if (slotHash[slot] == h && equalsWord(slots[slot], chars, start, len)) {
         throw new IllegalArgumentException("duplicate word in lexicon: " + word(word));
       }
       slot = (slot + 1) & mask;
     }
     slots[slot] = word;
+    slotHash[slot] = h;
   }
 
   private static int hash(char[] buf, int off, int len) {
@@ -161,21 +204,31 @@ public final class Lexicon {
     return h;
   }
 
+  /**
+   * A plain loop: words are short, and profiles showed the setup of the vectorised comparison
+   * in Arrays.equals costing more than the comparison itself.
+   */
   private boolean equalsWord(int word, char[] buf, int off, int len) {
     int start = wordStart[word];
     if (wordStart[word + 1] - start != len) {
       return false;
     }
-    return Arrays.equals(chars, start, start + len, buf, off, off + len);
+    for (int i = 0; i < len; i++) {
+      if (chars[start + i] != buf[off + i]) {
+        return false;
+      }
+    }
+    return true;
   }
 
   /** Id of the word {@code buf[off..off+len)}, or -1 if it is not in the lexicon. */
   public int lookup(char[] buf, int off, int len) {
     int mask = slots.length - 1;
-    int slot = hash(buf, off, len) & mask;
+    int h = hash(buf, off, len);
+    int slot = h & mask;
     int word;
     while ((word = slots[slot]) >= 0) {
-      if (equalsWord(word, buf, off, len)) {
+      if (slotHash[slot] == h && equalsWord(word, buf, off, len)) {
         return word;
       }
       slot = (slot + 1) & mask;
@@ -235,21 +288,22 @@ public final class Lexicon {
    * previous}, or NaN if that context was not seen with the word.
    */
   public float contextLogEmission(int word, int k, int previous) {
-    int pair = tagStart[word] + k;
-    int from = contextStart[pair];
-    int to = contextStart[pair + 1];
-    while (from < to) {
-      int mid = (from + to) >>> 1;
-      int s = contextState[mid];
-      if (s < previous) {
-        from = mid + 1;
-      } else if (s > previous) {
-        to = mid;
-      } else {
-        return contextLogEmission[mid];
-      }
-    }
-    return Float.NaN;
+    int row = contextRow(word, k);
+    return row < 0 ? Float.NaN : contextLogEmissionInRow(row, previous);
+  }
+
+  /**
+   * The row of context emissions of the word's {@code k}-th state, for {@link
+   * #contextLogEmissionInRow}, or -1 if no context was kept for it: a decoder looks it up once
+   * per candidate and then reads one value per previous state.
+   */
+  public int contextRow(int word, int k) {
+    return contextRow[tagStart[word] + k];
+  }
+
+  /** The emission in {@code row} right after state {@code previous}, or NaN if that context was not seen. */
+  public float contextLogEmissionInRow(int row, int previous) {
+    return previous < contextWidth ? denseContext[row + previous] : Float.NaN;
   }
 
   /** Total number of word/context/state triples with their own emission. */
@@ -300,8 +354,8 @@ public final class Lexicon {
 
   /** Approximate heap size in bytes. */
   public long ramBytesUsed() {
-    return 2L * chars.length + 4L * (wordStart.length + slots.length + tagStart.length) + 10L * tagIds.length
-        + 6L * contextState.length + (userListed == null ? 1 : 2) * words();
+    return 2L * chars.length + 4L * (wordStart.length + 2 * slots.length + tagStart.length) + 10L * tagIds.length
+        + 6L * contextState.length + (userListed == null ? 1 : 2) * words() + 4L * (contextRow.length + denseContext.length);
   }
 
   private int words() {

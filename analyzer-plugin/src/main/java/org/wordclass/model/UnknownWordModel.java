@@ -29,6 +29,12 @@ public final class UnknownWordModel {
   private final double[] baseDistribution;
   private final int[] trieOfShape;
   private final SuffixTrie[] tries;
+  /**
+   * Per trie, per count entry: the index of its tag among the open tags, or -1 for a closed
+   * tag. Found once here rather than by a binary search for every count of every ending that
+   * an unknown word is scored with.
+   */
+  private final int[][] openOfCount;
 
   /**
    * @param theta weight of the shorter ending in successive abstraction
@@ -76,6 +82,13 @@ public final class UnknownWordModel {
     this.baseDistribution = baseDistribution.clone();
     this.trieOfShape = trieOfShape.clone();
     this.tries = tries.clone();
+    this.openOfCount = new int[tries.length][];
+    for (int t = 0; t < tries.length; t++) {
+      openOfCount[t] = new int[tries[t].countTag.length];
+      for (int i = 0; i < openOfCount[t].length; i++) {
+        openOfCount[t][i] = Math.max(-1, Arrays.binarySearch(this.openTags, tries[t].countTag[i]));
+      }
+    }
   }
 
   /** Number of candidate tags of every unknown word. */
@@ -111,10 +124,12 @@ public final class UnknownWordModel {
    * @return length of the longest ending that was found in the counts
    */
   public int tagDistribution(char[] buf, int off, int len, double weight, long[] heldOut, double[] scratch, double[] out) {
-    SuffixTrie trie = tries[trieOfShape[WordShape.classify(buf, off, len).ordinal()]];
+    int t = trieOfShape[WordShape.classify(buf, off, len).ordinal()];
+    SuffixTrie trie = tries[t];
+    int[] openOf = openOfCount[t];
     // the shape's own distribution, abstracted to the one over all rare words
     System.arraycopy(baseDistribution, 0, out, 0, openTags.length);
-    abstractTo(trie, 0, weight, heldOut, out, scratch);
+    abstractTo(trie, openOf, 0, weight, heldOut, out, scratch);
     int node = 0;
     int depth = 0;
     while (depth < Math.min(len, maxSuffixLength)) {
@@ -124,17 +139,18 @@ public final class UnknownWordModel {
       }
       node = next;
       depth++;
-      abstractTo(trie, node, weight, heldOut, out, scratch);
+      abstractTo(trie, openOf, node, weight, heldOut, out, scratch);
     }
     return depth;
   }
 
   /** dist := (P^(t | node) + θ dist) / (1 + θ), over open tags. */
-  private void abstractTo(SuffixTrie trie, int node, double weight, long[] heldOut, double[] dist, double[] scratch) {
+  private void abstractTo(SuffixTrie trie, int[] openOf, int node, double weight, long[] heldOut, double[] dist,
+      double[] scratch) {
     int k = openTags.length;
     Arrays.fill(scratch, 0, k, 0.0);
     for (int i = trie.countStart[node], end = trie.countStart[node + 1]; i < end; i++) {
-      int open = Arrays.binarySearch(openTags, trie.countTag[i]);
+      int open = openOf[i];
       if (open >= 0) {
         scratch[open] = trie.countValue[i];
       }
@@ -202,7 +218,7 @@ public final class UnknownWordModel {
   public long ramBytesUsed() {
     long bytes = 16L * (openTags.length + logPrior.length);
     for (SuffixTrie t : tries) {
-      bytes += 14L * t.nodeCount() + 6L * t.countTag.length;
+      bytes += 14L * t.nodeCount() + 10L * t.countTag.length;
     }
     return bytes;
   }
