@@ -254,6 +254,16 @@ public final class Lattice {
     return pairLogEmission[pairStart[position] + j * candidateCount(position) + k];
   }
 
+  /**
+   * Which of its word's lexicon states the {@code k}-th candidate of {@code position} is (its
+   * index {@code k'} for {@link org.wordclass.model.Lexicon#tag(int, int)}), or -1 for an unknown
+   * word. Not always {@code k}: where tags are split by capitalisation, only the states that
+   * match how the token is written are candidates.
+   */
+  public int candidateEntry(int position, int k) {
+    return candidateEntry[candidateStart[position] + k];
+  }
+
   /** Whether the token at {@code position} is in the model's lexicon. */
   public boolean isKnown(int position) {
     return wordId[position] >= 0;

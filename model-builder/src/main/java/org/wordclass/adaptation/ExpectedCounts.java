@@ -72,7 +72,7 @@ final class ExpectedCounts {
       int candidates = lattice.candidateCount(i);
       if (word >= 0) {
         for (int k = 0; k < candidates; k++) {
-          pairs[lexicon.pairIndex(word, k)] += decoder.posterior(i, k);
+          pairs[lexicon.pairIndex(word, lattice.candidateEntry(i, k))] += decoder.posterior(i, k);
         }
         continue;
       }
