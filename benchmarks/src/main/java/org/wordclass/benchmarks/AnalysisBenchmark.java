@@ -1,7 +1,6 @@
 package org.wordclass.benchmarks;
 
 import java.io.IOException;
-import java.util.List;
 import java.util.concurrent.TimeUnit;
 import org.apache.lucene.analysis.Analyzer;
 import org.apache.lucene.analysis.TokenStream;
@@ -11,9 +10,7 @@ import org.openjdk.jmh.annotations.BenchmarkMode;
 import org.openjdk.jmh.annotations.Mode;
 import org.openjdk.jmh.annotations.OutputTimeUnit;
 import org.openjdk.jmh.annotations.Scope;
-import org.openjdk.jmh.annotations.Setup;
 import org.openjdk.jmh.annotations.State;
-import org.openjdk.jmh.annotations.TearDown;
 
 /**
  * Analysis throughput of standard tokenizer + lower-casing with and without the word-class
@@ -23,24 +20,7 @@ import org.openjdk.jmh.annotations.TearDown;
 @State(Scope.Thread)
 @BenchmarkMode(Mode.Throughput)
 @OutputTimeUnit(TimeUnit.SECONDS)
-public class AnalysisBenchmark {
-  private List<String> texts;
-  private Analyzer withFilter;
-  private Analyzer withoutFilter;
-
-  @Setup
-  public void setUp() {
-    texts = Ewt.testTexts();
-    withFilter = Chains.build(true);
-    withoutFilter = Chains.build(false);
-  }
-
-  @TearDown
-  public void tearDown() {
-    withFilter.close();
-    withoutFilter.close();
-  }
-
+public class AnalysisBenchmark extends ChainPairBenchmark {
   @Benchmark
   public long withFilter(Tokens counter) throws IOException {
     return analyze(withFilter, counter);

@@ -1,7 +1,6 @@
 package org.wordclass.benchmarks;
 
 import java.io.IOException;
-import java.util.List;
 import java.util.concurrent.TimeUnit;
 import org.apache.lucene.analysis.Analyzer;
 import org.apache.lucene.document.Document;
@@ -17,7 +16,6 @@ import org.openjdk.jmh.annotations.OutputTimeUnit;
 import org.openjdk.jmh.annotations.Scope;
 import org.openjdk.jmh.annotations.Setup;
 import org.openjdk.jmh.annotations.State;
-import org.openjdk.jmh.annotations.TearDown;
 
 /**
  * Indexing throughput into a fresh in-memory directory, with and without the word-class filter
@@ -27,24 +25,12 @@ import org.openjdk.jmh.annotations.TearDown;
 @State(Scope.Thread)
 @BenchmarkMode(Mode.Throughput)
 @OutputTimeUnit(TimeUnit.SECONDS)
-public class IndexingBenchmark {
-  private List<String> texts;
+public class IndexingBenchmark extends ChainPairBenchmark {
   private long tokensPerPass;
-  private Analyzer withFilter;
-  private Analyzer withoutFilter;
 
   @Setup
-  public void setUp() {
-    texts = Ewt.testTexts();
+  public void countTokens() {
     tokensPerPass = Ewt.tokenCount(Ewt.testTokens());
-    withFilter = Chains.build(true);
-    withoutFilter = Chains.build(false);
-  }
-
-  @TearDown
-  public void tearDown() {
-    withFilter.close();
-    withoutFilter.close();
   }
 
   @Benchmark
