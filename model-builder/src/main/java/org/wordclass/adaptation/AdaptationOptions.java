@@ -45,8 +45,23 @@ public record AdaptationOptions(
    * accuracy in docs/adaptation.md).
    */
   public static final AdaptationOptions DEFAULTS = new AdaptationOptions(
-      5, 1e-4, 0.5, true, 0.1, 3, 0.1, Transitions.Smoothing.DELETED_INTERPOLATION,
+      Defaults.ITERATIONS, Defaults.MIN_RELATIVE_GAIN, Defaults.NEW_WEIGHT, Defaults.LEXICON_CONSTRAINT, 0.1,
+      Defaults.ADD_WORDS_MIN_COUNT, 0.1, Transitions.Smoothing.DELETED_INTERPOLATION,
       Runtime.getRuntime().availableProcessors(), 256);
+
+  /**
+   * The defaults as compile-time constants, so that a command line can name them in its option
+   * declarations and never drift from {@link #DEFAULTS}.
+   */
+  public static final class Defaults {
+    public static final int ITERATIONS = 5;
+    public static final double MIN_RELATIVE_GAIN = 1e-4;
+    public static final double NEW_WEIGHT = 0.5;
+    public static final boolean LEXICON_CONSTRAINT = true;
+    public static final int ADD_WORDS_MIN_COUNT = 3;
+
+    private Defaults() {}
+  }
 
   public AdaptationOptions {
     if (maxIterations < 1) {

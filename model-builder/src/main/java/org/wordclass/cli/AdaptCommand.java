@@ -5,6 +5,7 @@ import java.util.List;
 import java.util.Locale;
 import org.wordclass.adaptation.Adaptation;
 import org.wordclass.adaptation.AdaptationOptions;
+import org.wordclass.adaptation.AdaptationOptions.Defaults;
 import org.wordclass.adaptation.IndexFieldSource;
 import org.wordclass.adaptation.TextFileSource;
 import org.wordclass.adaptation.TextSource;
@@ -67,23 +68,24 @@ final class AdaptCommand extends BaseCommand {
       description = "Tag column of the held-out file. Default: ${DEFAULT-VALUE}.")
   TagColumn heldOutTags;
 
-  @Option(names = "--iterations", paramLabel = "N", defaultValue = "5", description = "Iterations at most. Default: ${DEFAULT-VALUE}.")
+  @Option(names = "--iterations", paramLabel = "N", defaultValue = "" + Defaults.ITERATIONS, description = "Iterations at most. Default: ${DEFAULT-VALUE}.")
   int iterations;
 
-  @Option(names = "--min-gain", paramLabel = "SHARE", defaultValue = "1e-4",
+  @Option(names = "--min-gain", paramLabel = "SHARE", defaultValue = "" + Defaults.MIN_RELATIVE_GAIN,
       description = "Stop when an iteration raises the text's log-likelihood by less than this share. Default: ${DEFAULT-VALUE}.")
   double minGain;
 
-  @Option(names = "--new-weight", paramLabel = "λ", defaultValue = "0.5",
+  @Option(names = "--new-weight", paramLabel = "λ", defaultValue = "" + Defaults.NEW_WEIGHT,
       description = "Weight of the re-estimated parameters against the starting ones (1: plain Baum-Welch). "
           + "Default: ${DEFAULT-VALUE}.")
   double newWeight;
 
-  @Option(names = "--lexicon-constraint", negatable = true, defaultValue = "true", fallbackValue = "true",
+  @Option(names = "--lexicon-constraint", negatable = true, defaultValue = "" + Defaults.LEXICON_CONSTRAINT,
+      fallbackValue = "true",
       description = "Known words keep the tags the starting model allows them. Default: ${DEFAULT-VALUE}.")
   boolean lexiconConstraint;
 
-  @Option(names = "--add-words-min-count", paramLabel = "N", defaultValue = "3",
+  @Option(names = "--add-words-min-count", paramLabel = "N", defaultValue = "" + Defaults.ADD_WORDS_MIN_COUNT,
       description = "Unknown words seen at least N times in the text join the lexicon (0: none). Default: ${DEFAULT-VALUE}.")
   int addWordsMinCount;
 
