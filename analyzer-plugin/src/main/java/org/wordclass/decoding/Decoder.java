@@ -26,8 +26,8 @@ public final class Decoder {
   private final Lattice lattice;
   private final int states;
   private final int boundary;
-  private final double[] logBigram;
-  private final double[] logTrigram;
+  private final float[] logBigram;
+  private final float[] logTrigram;
   private final double[] bigram;
   private final double[] trigram;
   private final int[] boundaryState;
@@ -58,8 +58,8 @@ public final class Decoder {
     this.lattice = new Lattice(model);
     this.states = model.states().size() + 1;
     this.boundary = model.boundary();
-    this.logBigram = model.logBigramTable();
-    this.logTrigram = model.logTrigramTable();
+    this.logBigram = model.logBigramFloats();
+    this.logTrigram = model.logTrigramFloats();
     this.bigram = model.bigramTable();
     this.trigram = model.trigramTable();
     this.boundaryState = new int[] {boundary};
@@ -172,12 +172,13 @@ public final class Decoder {
       int po = statesFrom(i - 1);
       int co = lattice.candidateOffset(i);
       int emit = lattice.pairOffset(i);
+      int stride = lattice.pairStride(i);
       for (int k = 0; k < kc; k++) {
         int tk = current[co + k];
         double top = Double.NEGATIVE_INFINITY;
         int arg = 0;
         for (int j = 0; j < kp; j++) {
-          double s = prevScore[prev + j] + logBigram[previous[po + j] * states + tk] + emissions[emit + j * kc + k];
+          double s = prevScore[prev + j] + logBigram[previous[po + j] * states + tk] + emissions[emit + j * stride + k];
           if (s > top) {
             top = s;
             arg = j;
@@ -207,7 +208,6 @@ public final class Decoder {
   private void viterbiSecondOrder(int[] best, int n) {
     double[] emissions = lattice.pairLogEmissions();
     int[] current = lattice.candidateStates();
-    int plane = states * states;
     for (int i = 0; i < n; i++) {
       int kpp = count(i - 2);
       int kp = count(i - 1);
@@ -221,22 +221,19 @@ public final class Decoder {
       int po = statesFrom(i - 1);
       int co = lattice.candidateOffset(i);
       int emit = lattice.pairOffset(i);
+      int stride = lattice.pairStride(i);
       for (int j = 0; j < kp; j++) {
         int tj = previous[po + j];
         for (int k = 0; k < kc; k++) {
           // (th * states + tj) * states + tk, with the part that does not depend on h taken out
           int last = tj * states + current[co + k];
+          // only the best score here; which h gave it is found again when tracing back, so the
+          // loop has no data-dependent branch to mispredict
           double top = Double.NEGATIVE_INFINITY;
-          int arg = 0;
           for (int h = 0; h < kpp; h++) {
-            double s = prevScore[prev + h * kp + j] + logTrigram[first[fo + h] * plane + last];
-            if (s > top) {
-              top = s;
-              arg = h;
-            }
+            top = Math.max(top, prevScore[prev + h * kp + j] + logTrigram[first[fo + h] * plane() + last]);
           }
-          score[here + j * kc + k] = top + emissions[emit + j * kc + k];
-          backPointer[here + j * kc + k] = arg;
+          score[here + j * kc + k] = top + emissions[emit + j * stride + k];
         }
       }
     }
@@ -261,10 +258,38 @@ public final class Decoder {
     int k = argK;
     for (int i = n - 1; i >= 0; i--) {
       best[i] = k;
-      int h = backPointer[stateStart[i] + j * count(i) + k];
+      int h = bestBefore(i, j, k);
       k = j;
       j = h;
     }
+  }
+
+  /**
+   * The candidate h of position {@code i - 2} on the best path to (j at i - 1, k at i): the first
+   * h whose score plus transition equals the best, computed exactly as the forward pass did.
+   */
+  private int bestBefore(int i, int j, int k) {
+    int kpp = count(i - 2);
+    if (kpp == 1) {
+      return 0;
+    }
+    int kp = count(i - 1);
+    int prev = stateStart[i - 1];
+    int last = tagAt(i - 1, j) * states + tagAt(i, k);
+    double top = Double.NEGATIVE_INFINITY;
+    int arg = 0;
+    for (int h = 0; h < kpp; h++) {
+      double s = score[prev + h * kp + j] + logTrigram[tagAt(i - 2, h) * plane() + last];
+      if (s > top) {
+        top = s;
+        arg = h;
+      }
+    }
+    return arg;
+  }
+
+  private int plane() {
+    return states * states;
   }
 
   /**
@@ -394,6 +419,7 @@ public final class Decoder {
       int here = stateStart[i];
       int next = stateStart[i + 1];
       int emit = lattice.pairOffset(i + 1);
+      int stride = lattice.pairStride(i + 1);
       int kk = count(i + 1);
       // the unnormalised backward value at i is betaSum[i] * beta, so this makes the ξ of i sum to 1
       double norm = 1.0 / (betaSum[i] * overlap(here, count(i)));
@@ -402,7 +428,7 @@ public final class Decoder {
         int row = tagAt(i, j) * states;
         for (int k = 0; k < kk; k++) {
           int index = row + tagAt(i + 1, k);
-          counts[index] += a * bigram[index] * scaledEmission[emit + j * kk + k] * beta[next + k];
+          counts[index] += a * bigram[index] * scaledEmission[emit + j * stride + k] * beta[next + k];
         }
       }
     }
@@ -422,6 +448,7 @@ public final class Decoder {
       int here = stateStart[i];
       int next = stateStart[i + 1];
       int emit = lattice.pairOffset(i + 1);
+      int stride = lattice.pairStride(i + 1);
       double norm = 1.0 / (betaSum[i] * overlap(here, kh * kj));
       for (int h = 0; h < kh; h++) {
         int th = tagAt(i - 1, h);
@@ -430,7 +457,7 @@ public final class Decoder {
           int base = (th * states + tagAt(i, j)) * states;
           for (int k = 0; k < kk; k++) {
             int index = base + tagAt(i + 1, k);
-            counts[index] += a * trigram[index] * scaledEmission[emit + j * kk + k] * beta[next + j * kk + k];
+            counts[index] += a * trigram[index] * scaledEmission[emit + j * stride + k] * beta[next + j * kk + k];
           }
         }
       }
@@ -482,13 +509,14 @@ public final class Decoder {
       int here = stateStart[i];
       int prev = i == 0 ? 0 : stateStart[i - 1];
       int emit = lattice.pairOffset(i);
+      int stride = lattice.pairStride(i);
       int kc = count(i);
       double sum = 0;
       for (int k = 0; k < kc; k++) {
         int tk = tagAt(i, k);
         double a = 0;
         for (int j = 0; j < kp; j++) {
-          a += (i == 0 ? 1 : alpha[prev + j]) * bigram[tagAt(i - 1, j) * states + tk] * scaledEmission[emit + j * kc + k];
+          a += (i == 0 ? 1 : alpha[prev + j]) * bigram[tagAt(i - 1, j) * states + tk] * scaledEmission[emit + j * stride + k];
         }
         alpha[here + k] = a;
         sum += a;
@@ -509,13 +537,14 @@ public final class Decoder {
       int here = stateStart[i];
       int next = stateStart[i + 1];
       int emit = lattice.pairOffset(i + 1);
+      int stride = lattice.pairStride(i + 1);
       int kn = count(i + 1);
       sum = 0;
       for (int j = 0; j < count(i); j++) {
         int tj = tagAt(i, j);
         double b = 0;
         for (int k = 0; k < kn; k++) {
-          b += bigram[tj * states + tagAt(i + 1, k)] * scaledEmission[emit + j * kn + k] * beta[next + k];
+          b += bigram[tj * states + tagAt(i + 1, k)] * scaledEmission[emit + j * stride + k] * beta[next + k];
         }
         beta[here + j] = b;
         sum += b;
@@ -542,6 +571,7 @@ public final class Decoder {
       int here = stateStart[i];
       int prev = i == 0 ? 0 : stateStart[i - 1];
       int emit = lattice.pairOffset(i);
+      int stride = lattice.pairStride(i);
       double sum = 0;
       for (int j = 0; j < kp; j++) {
         int tj = tagAt(i - 1, j);
@@ -551,7 +581,7 @@ public final class Decoder {
           for (int h = 0; h < kpp; h++) {
             a += (i == 0 ? 1 : alpha[prev + h * kp + j]) * trigram[(tagAt(i - 2, h) * states + tj) * states + tk];
           }
-          a *= scaledEmission[emit + j * kc + k];
+          a *= scaledEmission[emit + j * stride + k];
           alpha[here + j * kc + k] = a;
           sum += a;
         }
@@ -580,6 +610,7 @@ public final class Decoder {
       int here = stateStart[i];
       int next = stateStart[i + 1];
       int emit = lattice.pairOffset(i + 1);
+      int stride = lattice.pairStride(i + 1);
       sum = 0;
       for (int h = 0; h < kh; h++) {
         int th = tagAt(i - 1, h);
@@ -587,7 +618,7 @@ public final class Decoder {
           int base = (th * states + tagAt(i, j)) * states;
           double b = 0;
           for (int k = 0; k < kk; k++) {
-            b += trigram[base + tagAt(i + 1, k)] * scaledEmission[emit + j * kk + k] * beta[next + j * kk + k];
+            b += trigram[base + tagAt(i + 1, k)] * scaledEmission[emit + j * stride + k] * beta[next + j * kk + k];
           }
           beta[here + h * kj + j] = b;
           sum += b;

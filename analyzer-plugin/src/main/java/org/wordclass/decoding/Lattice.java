@@ -22,7 +22,6 @@ public final class Lattice {
   private final HmmModel model;
   private final StateSpace states;
   private final boolean splitsByCapital;
-  private final double[] unknownScratch;
   private final double[] unknownScores;
   private char[] lowerCased = new char[32];
   private int size;
@@ -36,6 +35,8 @@ public final class Lattice {
   /** Whether the last {@link #lookup} found the word only in lower case. */
   private boolean foundLowerCased;
   private int[] pairStart = new int[65];
+  /** Per position: its number of candidates if its emissions depend on the previous candidate, else 0. */
+  private int[] pairStride = new int[64];
   private double[] pairLogEmission = new double[1024];
   private int[] contextRowOf = new int[32];
   private double[] plainOf = new double[32];
@@ -45,7 +46,6 @@ public final class Lattice {
     this.states = model.states();
     this.splitsByCapital = states.uses(StateSpace.CAPITALISED);
     int open = model.unknownWords().openTagCount();
-    this.unknownScratch = new double[open];
     this.unknownScores = new double[open];
   }
 
@@ -162,7 +162,7 @@ public final class Lattice {
 
   private int addUnknown(char[] buf, int off, int len, int flags, int tag, int start) {
     UnknownWordModel unknown = model.unknownWords();
-    endingLength[size] = (short) unknown.logEmissions(buf, off, len, unknownScratch, unknownScores);
+    endingLength[size] = (short) unknown.logEmissions(buf, off, len, unknownScores);
     int end = start;
     for (int pass = 0; pass < 2 && end == start; pass++) {
       for (int k = 0; k < unknown.openTagCount(); k++) {
@@ -180,16 +180,26 @@ public final class Lattice {
     return end;
   }
 
-  /** Emissions of {@code position} for every candidate of the position before it. */
+  /**
+   * Emissions of {@code position} for every candidate of the position before it; a single row
+   * (stride 0) where they do not depend on it, as for most tokens.
+   */
   private void fillPairEmissions(int position) {
-    int previous = position == 0 ? 1 : candidateCount(position - 1);
     int here = candidateCount(position);
+    int word = wordId[position];
+    boolean contexts = word >= 0 && model.lexicon().hasContexts(word);
+    int previous = contexts && position > 0 ? candidateCount(position - 1) : 1;
     int start = pairStart[position];
     int end = start + previous * here;
     if (end > pairLogEmission.length) {
       pairLogEmission = Arrays.copyOf(pairLogEmission, Math.max(end, 2 * pairLogEmission.length));
     }
     pairStart[position + 1] = end;
+    pairStride[position] = contexts ? here : 0;
+    if (!contexts) {
+      System.arraycopy(candidateLogEmission, candidateStart[position], pairLogEmission, start, here);
+      return;
+    }
     prepareContexts(position, here);
     for (int j = 0; j < previous; j++) {
       int previousState = position == 0 ? model.boundary() : candidateState(position - 1, j);
@@ -213,13 +223,11 @@ public final class Lattice {
       plainOf = new double[contextRowOf.length];
     }
     int word = wordId[position];
-    boolean contexts = word >= 0 && model.lexicon().hasContexts(word);
     double unseen = model.cues().unseenContextLogWeight();
     int first = candidateStart[position];
     for (int k = 0; k < here; k++) {
-      double e = candidateLogEmission[first + k];
-      contextRowOf[k] = contexts ? model.lexicon().contextRow(word, candidateEntry[first + k]) : -1;
-      plainOf[k] = contexts ? e + unseen : e;
+      contextRowOf[k] = model.lexicon().contextRow(word, candidateEntry[first + k]);
+      plainOf[k] = candidateLogEmission[first + k] + unseen;
     }
   }
 
@@ -251,7 +259,7 @@ public final class Lattice {
    * j}-th candidate of the position before (j = 0 for the first token, after the boundary).
    */
   public double logEmission(int position, int j, int k) {
-    return pairLogEmission[pairStart[position] + j * candidateCount(position) + k];
+    return pairLogEmission[pairStart[position] + j * pairStride[position] + k];
   }
 
   /**
@@ -292,6 +300,16 @@ public final class Lattice {
     return candidateStart[position];
   }
 
+  /**
+   * How far apart in the flat pair array the emissions of {@code position} after consecutive
+   * candidates of the position before are: its candidate count, or 0 where they do not depend on
+   * the previous candidate and one row serves all. The emission after candidate j of candidate k
+   * is at {@code pairOffset + j * pairStride + k}.
+   */
+  int pairStride(int position) {
+    return pairStride[position];
+  }
+
   /** First index of the emissions of {@code position} in the flat pair array. */
   int pairOffset(int position) {
     return pairStart[position];
@@ -321,6 +339,7 @@ public final class Lattice {
       int grown = Math.max(tokens + 1, candidateStart.length * 2);
       candidateStart = Arrays.copyOf(candidateStart, grown);
       pairStart = Arrays.copyOf(pairStart, grown);
+      pairStride = Arrays.copyOf(pairStride, grown);
       wordId = Arrays.copyOf(wordId, grown);
       source = Arrays.copyOf(source, grown);
       endingLength = Arrays.copyOf(endingLength, grown);

@@ -35,6 +35,13 @@ public final class UnknownWordModel {
    * an unknown word is scored with.
    */
   private final int[][] openOfCount;
+  /**
+   * Per trie, {@code log P(t | ending)} for every node and open tag ({@code node * openTags +
+   * k}): successive abstraction gives each node one distribution, fixed by the path from the
+   * root, so it is computed once here for all nodes instead of for every unknown token. About 8
+   * bytes per node and open tag.
+   */
+  private final double[][] nodeLogDistribution;
 
   /**
    * @param theta weight of the shorter ending in successive abstraction
@@ -89,6 +96,33 @@ public final class UnknownWordModel {
         openOfCount[t][i] = Math.max(-1, Arrays.binarySearch(this.openTags, tries[t].countTag[i]));
       }
     }
+    this.nodeLogDistribution = new double[tries.length][];
+    for (int t = 0; t < tries.length; t++) {
+      nodeLogDistribution[t] = logDistributions(t);
+    }
+  }
+
+  /** {@code log P(t | ending)} of every node of trie {@code t}, parents before children (breadth-first order). */
+  private double[] logDistributions(int t) {
+    SuffixTrie trie = tries[t];
+    int k = openTags.length;
+    double[] all = new double[trie.nodeCount() * k];
+    double[] dist = baseDistribution.clone();
+    double[] scratch = new double[k];
+    abstractTo(trie, openOfCount[t], 0, theta, null, dist, scratch);
+    System.arraycopy(dist, 0, all, 0, k);
+    for (int node = 0; node < trie.nodeCount(); node++) {
+      for (int edge = trie.childStart[node]; edge < trie.childStart[node + 1]; edge++) {
+        int child = edge + 1;
+        System.arraycopy(all, node * k, dist, 0, k);
+        abstractTo(trie, openOfCount[t], child, theta, null, dist, scratch);
+        System.arraycopy(dist, 0, all, child * k, k);
+      }
+    }
+    for (int i = 0; i < all.length; i++) {
+      all[i] = Math.log(all[i]);
+    }
+    return all;
   }
 
   /** Number of candidate tags of every unknown word. */
@@ -104,13 +138,20 @@ public final class UnknownWordModel {
   /**
    * Writes {@code log P(word | openTag(k))}, up to a constant shared by all k, into {@code out[k]}.
    *
-   * @param scratch at least {@link #openTagCount()} long; overwritten
    * @return length of the longest ending that was found in the counts
    */
-  public int logEmissions(char[] buf, int off, int len, double[] scratch, double[] out) {
-    int depth = tagDistribution(buf, off, len, theta, null, scratch, out);
-    for (int i = 0; i < openTags.length; i++) {
-      out[i] = Math.log(out[i]) - logPrior[openTags[i]];
+  public int logEmissions(char[] buf, int off, int len, double[] out) {
+    int t = trieOfShape[WordShape.classify(buf, off, len).ordinal()];
+    SuffixTrie trie = tries[t];
+    int node = 0;
+    int depth = 0;
+    for (int next; depth < Math.min(len, maxSuffixLength) && (next = trie.child(node, buf[off + len - 1 - depth])) >= 0; depth++) {
+      node = next;
+    }
+    double[] logDistribution = nodeLogDistribution[t];
+    int k = openTags.length;
+    for (int i = 0, from = node * k; i < k; i++) {
+      out[i] = logDistribution[from + i] - logPrior[openTags[i]];
     }
     return depth;
   }
@@ -218,7 +259,7 @@ public final class UnknownWordModel {
   public long ramBytesUsed() {
     long bytes = 16L * (openTags.length + logPrior.length);
     for (SuffixTrie t : tries) {
-      bytes += 14L * t.nodeCount() + 10L * t.countTag.length;
+      bytes += (14L + 8L * openTags.length) * t.nodeCount() + 10L * t.countTag.length;
     }
     return bytes;
   }
