@@ -47,9 +47,12 @@ public final class Lexicon {
 
   private final char[] chars;
   private final int[] wordStart;
-  private final int[] slots;
-  /** The full hash of the word in each slot, so a probe compares characters only on a likely match. */
-  private final int[] slotHash;
+  /**
+   * Open addressing, one long per slot: the word's full hash in the high half, so that a probe
+   * compares characters only on a likely match, and word id + 1 in the low half (0: empty). One
+   * array rather than two, so a probe touches one cache line.
+   */
+  private final long[] slots;
   private final int[] tagStart;
   private final short[] tagIds;
   private final float[] logEmissions;
@@ -103,9 +106,7 @@ public final class Lexicon {
     chars = new char[totalChars];
     tagIds = new short[totalTags];
     logEmissions = new float[totalTags];
-    slots = new int[tableSize(words)];
-    slotHash = new int[slots.length];
-    Arrays.fill(slots, -1);
+    slots = new long[tableSize(words)];
     int c = 0;
     int t = 0;
     int x = 0;
@@ -180,14 +181,14 @@ public final class Lexicon {
     int mask = slots.length - 1;
     int h = hash(chars, start, len);
     int slot = h & mask;
-    while (slots[slot] >= 0) {
-      if (slotHash[slot] == h && equalsWord(slots[slot], chars, start, len)) {
+    long entry;
+    while ((entry = slots[slot]) != 0) {
+      if ((int) (entry >>> 32) == h && equalsWord((int) entry - 1, chars, start, len)) {
         throw new IllegalArgumentException("duplicate word in lexicon: " + word(word));
       }
       slot = (slot + 1) & mask;
     }
-    slots[slot] = word;
-    slotHash[slot] = h;
+    slots[slot] = ((long) h << 32) | (word + 1);
   }
 
   private static int hash(char[] buf, int off, int len) {
@@ -226,10 +227,10 @@ public final class Lexicon {
     int mask = slots.length - 1;
     int h = hash(buf, off, len);
     int slot = h & mask;
-    int word;
-    while ((word = slots[slot]) >= 0) {
-      if (slotHash[slot] == h && equalsWord(word, buf, off, len)) {
-        return word;
+    long entry;
+    while ((entry = slots[slot]) != 0) {
+      if ((int) (entry >>> 32) == h && equalsWord((int) entry - 1, buf, off, len)) {
+        return (int) entry - 1;
       }
       slot = (slot + 1) & mask;
     }
