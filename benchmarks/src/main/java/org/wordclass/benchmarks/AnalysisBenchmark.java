@@ -13,7 +13,7 @@ import org.openjdk.jmh.annotations.Scope;
 import org.openjdk.jmh.annotations.State;
 
 /**
- * Analysis throughput of standard tokenizer + lower-casing with and without the word-class
+ * Analysis throughput of each chain of {@link Chains} with and without the word-class
  * filter. One operation analyses every EWT test sentence, each as its own field value; the
  * {@code tokens} secondary result is tokens per second.
  */

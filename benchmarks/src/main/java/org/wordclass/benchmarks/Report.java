@@ -43,7 +43,7 @@ public final class Report {
       JsonNode without = byName.get(name.replace(".withFilter ", ".withoutFilter "));
       if (name.contains(".withFilter ") && without != null) {
         System.out.printf(Locale.ROOT, "| %s with / without filter (tokens/s) | %.3f |%n",
-            name.substring(0, name.indexOf('.')), tokens(with) / tokens(without));
+            (name.substring(0, name.indexOf('.')) + " " + params(with)).trim(), tokens(with) / tokens(without));
       }
     });
   }
