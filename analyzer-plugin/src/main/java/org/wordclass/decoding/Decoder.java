@@ -40,6 +40,12 @@ public final class Decoder {
   private double[] scaledEmission = new double[256];
   private double[] posterior = new double[256];
   private double[] betaSum = new double[64];
+  /**
+   * Per candidate h two positions back, while a position is decoded: the offset of its plane in
+   * the trigram table, and the score of (h, j) for the j at hand.
+   */
+  private int[] planeOf = new int[16];
+  private double[] column = new double[16];
   private double bestLogProbability;
   private double lastLogLikelihood = Double.NEGATIVE_INFINITY;
   private double maxEmissionSum;
@@ -208,8 +214,13 @@ public final class Decoder {
   private void viterbiSecondOrder(int[] best, int n) {
     double[] emissions = lattice.pairLogEmissions();
     int[] current = lattice.candidateStates();
+    int plane = states * states;
     for (int i = 0; i < n; i++) {
       int kpp = count(i - 2);
+      if (planeOf.length < kpp) {
+        planeOf = new int[kpp];
+        column = new double[kpp];
+      }
       int kp = count(i - 1);
       int kc = count(i);
       int here = stateStart[i];
@@ -222,18 +233,28 @@ public final class Decoder {
       int co = lattice.candidateOffset(i);
       int emit = lattice.pairOffset(i);
       int stride = lattice.pairStride(i);
+      for (int h = 0; h < kpp; h++) {
+        planeOf[h] = first[fo + h] * plane;
+      }
       for (int j = 0; j < kp; j++) {
         int tj = previous[po + j];
+        // the scores of (h, j) for every h, gathered once for all k
+        for (int h = 0; h < kpp; h++) {
+          column[h] = prevScore[prev + h * kp + j];
+        }
+        int cell = here + j * kc;
+        int emitted = emit + j * stride;
         for (int k = 0; k < kc; k++) {
           // (th * states + tj) * states + tk, with the part that does not depend on h taken out
           int last = tj * states + current[co + k];
-          // only the best score here; which h gave it is found again when tracing back, so the
-          // loop has no data-dependent branch to mispredict
+          // only the best score here; which h gave it is found again when tracing back, so
+          // nothing is stored per comparison
           double top = Double.NEGATIVE_INFINITY;
           for (int h = 0; h < kpp; h++) {
-            top = Math.max(top, prevScore[prev + h * kp + j] + logTrigram[first[fo + h] * plane() + last]);
+            double s = column[h] + logTrigram[planeOf[h] + last];
+            top = s > top ? s : top;
           }
-          score[here + j * kc + k] = top + emissions[emit + j * stride + k];
+          score[cell + k] = top + emissions[emitted + k];
         }
       }
     }
@@ -279,17 +300,13 @@ public final class Decoder {
     double top = Double.NEGATIVE_INFINITY;
     int arg = 0;
     for (int h = 0; h < kpp; h++) {
-      double s = score[prev + h * kp + j] + logTrigram[tagAt(i - 2, h) * plane() + last];
+      double s = score[prev + h * kp + j] + logTrigram[tagAt(i - 2, h) * states * states + last];
       if (s > top) {
         top = s;
         arg = h;
       }
     }
     return arg;
-  }
-
-  private int plane() {
-    return states * states;
   }
 
   /**
