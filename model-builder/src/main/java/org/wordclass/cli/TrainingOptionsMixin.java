@@ -77,12 +77,18 @@ final class TrainingOptionsMixin {
           + "--order 1 (see docs/latent-states.md). Default: ${DEFAULT-VALUE}.")
   int latentRounds;
 
+  @Option(names = "--min-tag-share", paramLabel = "SHARE",
+      description = "Leave a word/tag pair out of the lexicon when fewer than this share of the word's "
+          + "training occurrences carry the tag (annotation slips in frequent words); 0 keeps all. "
+          + "Default: ${DEFAULT-VALUE}.")
+  double minTagShare;
+
   /** The options given; a value the estimator refuses is reported as a usage error. */
   TrainingOptions toOptions() {
     try {
       TrainingOptions options = new TrainingOptions(order, maxSuffixLength, rareWordMaxCount,
           TrainingOptions.SuffixWeightRule.HELD_OUT, Double.NaN, openClassMinShare, shapeClasses,
-          capitalisationStates, contextEmissions, lowercaseFirstWord, contextMinCount, latentRounds);
+          capitalisationStates, contextEmissions, lowercaseFirstWord, contextMinCount, latentRounds, minTagShare);
       return withSuffixWeight(options, suffixWeight);
     } catch (IllegalArgumentException e) {
       throw new ParameterException(mixee.commandLine(), "Invalid training option: " + e.getMessage());

@@ -8,6 +8,7 @@ import java.util.Map;
 import java.util.TreeMap;
 import org.wordclass.model.HmmModel;
 import org.wordclass.model.Lexicon;
+import org.wordclass.model.StateSpace;
 import org.wordclass.model.SuffixTrie;
 import org.wordclass.model.TagSet;
 import org.wordclass.model.UnknownWordModel;
@@ -118,6 +119,7 @@ public final class HmmEstimator {
     for (Map.Entry<String, Map<Integer, Integer>> word : byWord.entrySet()) {
       TreeMap<Integer, Long> states = new TreeMap<>();
       word.getValue().forEach((raw, count) -> states.merge(plan.stateOf(raw), (long) count, Long::sum));
+      dropRareTags(states, plan.space());
       int[] ids = new int[states.size()];
       float[] emissions = new float[states.size()];
       int k = 0;
@@ -134,6 +136,21 @@ public final class HmmEstimator {
       }
     }
     return entries;
+  }
+
+  /** Removes the states of tags that carry less than the minimum share of the word's occurrences. */
+  private void dropRareTags(TreeMap<Integer, Long> states, StateSpace space) {
+    if (options.minTagShare() == 0) {
+      return;
+    }
+    long total = 0;
+    long[] perTag = new long[space.tagCount()];
+    for (Map.Entry<Integer, Long> e : states.entrySet()) {
+      perTag[space.tagOf(e.getKey())] += e.getValue();
+      total += e.getValue();
+    }
+    double floor = options.minTagShare() * total;
+    states.keySet().removeIf(state -> perTag[space.tagOf(state)] < floor);
   }
 
   /**
@@ -153,7 +170,9 @@ public final class HmmEstimator {
       }
       int previous = plan.stateOfKey(key >>> 16);
       int k = Arrays.binarySearch(ids, plan.stateOfKey(key & 0xFFFF));
-      perState.get(k).merge(previous, (long) count, Long::sum);
+      if (k >= 0) { // not a state left out as too rare for the word
+        perState.get(k).merge(previous, (long) count, Long::sum);
+      }
     });
     int[][] contextStates = new int[ids.length][];
     float[][] contextEmissions = new float[ids.length][];

@@ -30,6 +30,11 @@ import java.util.Map;
  *     fits the halves to the tagged corpus by EM and merges back the splits that help least (see
  *     {@code LatentStates}); 0 keeps the states of the supervised model. A model with latent
  *     states has no context-dependent emissions, whatever {@code contextEmissions} says
+ * @param minTagShare a known word keeps a tag only if at least this share of its training
+ *     occurrences carry it; rarer word/tag pairs, mostly annotation slips in frequent words
+ *     ("the" as a proper noun), are left out of the lexicon, which spares the decoder their
+ *     candidates. With n occurrences a pair seen once goes only where n exceeds 1 / share, so
+ *     rare words are never touched. 0 keeps every pair
  */
 public record TrainingOptions(
     int order,
@@ -43,10 +48,14 @@ public record TrainingOptions(
     boolean contextEmissions,
     boolean lowercaseFirstWord,
     int contextMinCount,
-    int latentRounds) {
+    int latentRounds,
+    double minTagShare) {
+
+  /** Default of {@link #minTagShare}, chosen on EWT dev (see docs/accuracy.md). */
+  public static final double MIN_TAG_SHARE = 0.002;
 
   public static final TrainingOptions DEFAULTS =
-      new TrainingOptions(2, 10, 10, SuffixWeightRule.HELD_OUT, Double.NaN, 0.002, false, true, true, true, 3, 0);
+      new TrainingOptions(2, 10, 10, SuffixWeightRule.HELD_OUT, Double.NaN, 0.002, false, true, true, true, 3, 0, MIN_TAG_SHARE);
 
   /** The classic second-order model with a suffix model and none of the later cues. */
   public static final TrainingOptions CLASSIC = DEFAULTS.withCues(false, false, false);
@@ -77,6 +86,9 @@ public record TrainingOptions(
     if (latentRounds < 0 || latentRounds > LatentStates.MAX_ROUNDS) {
       throw new IllegalArgumentException("latent rounds must be in 0.." + LatentStates.MAX_ROUNDS + ": " + latentRounds);
     }
+    if (!(minTagShare >= 0 && minTagShare < 1)) {
+      throw new IllegalArgumentException("minimum tag share must be in [0, 1): " + minTagShare);
+    }
     if (contextMinCount < 1) {
       throw new IllegalArgumentException("context count must be at least 1: " + contextMinCount);
     }
@@ -87,46 +99,53 @@ public record TrainingOptions(
 
   public TrainingOptions withOrder(int newOrder) {
     return new TrainingOptions(newOrder, maxSuffixLength, rareWordMaxCount, suffixWeightRule, suffixWeight,
-        openClassMinShare, shapeClasses, capitalisationStates, contextEmissions, lowercaseFirstWord, contextMinCount, latentRounds);
+        openClassMinShare, shapeClasses, capitalisationStates, contextEmissions, lowercaseFirstWord, contextMinCount, latentRounds, minTagShare);
   }
 
   /** A fixed θ. */
   public TrainingOptions withSuffixWeight(double weight) {
     return new TrainingOptions(order, maxSuffixLength, rareWordMaxCount, SuffixWeightRule.FIXED, weight,
-        openClassMinShare, shapeClasses, capitalisationStates, contextEmissions, lowercaseFirstWord, contextMinCount, latentRounds);
+        openClassMinShare, shapeClasses, capitalisationStates, contextEmissions, lowercaseFirstWord, contextMinCount, latentRounds, minTagShare);
   }
 
   /** θ chosen by a rule rather than given. */
   public TrainingOptions withSuffixWeightRule(SuffixWeightRule rule) {
     return new TrainingOptions(order, maxSuffixLength, rareWordMaxCount, rule, Double.NaN,
-        openClassMinShare, shapeClasses, capitalisationStates, contextEmissions, lowercaseFirstWord, contextMinCount, latentRounds);
+        openClassMinShare, shapeClasses, capitalisationStates, contextEmissions, lowercaseFirstWord, contextMinCount, latentRounds, minTagShare);
   }
 
   public TrainingOptions withShapeClasses(boolean shapes) {
     return new TrainingOptions(order, maxSuffixLength, rareWordMaxCount, suffixWeightRule, suffixWeight,
-        openClassMinShare, shapes, capitalisationStates, contextEmissions, lowercaseFirstWord, contextMinCount, latentRounds);
+        openClassMinShare, shapes, capitalisationStates, contextEmissions, lowercaseFirstWord, contextMinCount, latentRounds, minTagShare);
   }
 
   public TrainingOptions withSuffix(int maxLength, int rareMaxCount) {
     return new TrainingOptions(order, maxLength, rareMaxCount, suffixWeightRule, suffixWeight,
-        openClassMinShare, shapeClasses, capitalisationStates, contextEmissions, lowercaseFirstWord, contextMinCount, latentRounds);
+        openClassMinShare, shapeClasses, capitalisationStates, contextEmissions, lowercaseFirstWord, contextMinCount, latentRounds, minTagShare);
   }
 
   public TrainingOptions withOpenClassMinShare(double share) {
     return new TrainingOptions(order, maxSuffixLength, rareWordMaxCount, suffixWeightRule, suffixWeight,
-        share, shapeClasses, capitalisationStates, contextEmissions, lowercaseFirstWord, contextMinCount, latentRounds);
+        share, shapeClasses, capitalisationStates, contextEmissions, lowercaseFirstWord, contextMinCount, latentRounds, minTagShare);
   }
 
   /** The three cues beyond the classic model, each on or off. */
   public TrainingOptions withCues(boolean capitalisation, boolean context, boolean lowercaseFirst) {
     return new TrainingOptions(order, maxSuffixLength, rareWordMaxCount, suffixWeightRule, suffixWeight,
-        openClassMinShare, shapeClasses, capitalisation, context, lowercaseFirst, contextMinCount, latentRounds);
+        openClassMinShare, shapeClasses, capitalisation, context, lowercaseFirst, contextMinCount, latentRounds, minTagShare);
+  }
+
+  /** The lexicon's minimum tag share (0 keeps every word/tag pair). */
+  public TrainingOptions withMinTagShare(double share) {
+    return new TrainingOptions(order, maxSuffixLength, rareWordMaxCount, suffixWeightRule, suffixWeight,
+        openClassMinShare, shapeClasses, capitalisationStates, contextEmissions, lowercaseFirstWord, contextMinCount,
+        latentRounds, share);
   }
 
   /** Rounds of latent sub-state splitting (0 for none). */
   public TrainingOptions withLatentRounds(int rounds) {
     return new TrainingOptions(order, maxSuffixLength, rareWordMaxCount, suffixWeightRule, suffixWeight,
-        openClassMinShare, shapeClasses, capitalisationStates, contextEmissions, lowercaseFirstWord, contextMinCount, rounds);
+        openClassMinShare, shapeClasses, capitalisationStates, contextEmissions, lowercaseFirstWord, contextMinCount, rounds, minTagShare);
   }
 
   /** The options as provenance entries. */
@@ -144,6 +163,7 @@ public record TrainingOptions(
     m.put("option.lowercaseFirstWord", Boolean.toString(lowercaseFirstWord));
     m.put("option.contextMinCount", Integer.toString(contextMinCount));
     m.put("option.latentRounds", Integer.toString(latentRounds));
+    m.put("option.minTagShare", Double.toString(minTagShare));
     return m;
   }
 }
