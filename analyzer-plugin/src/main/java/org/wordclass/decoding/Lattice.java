@@ -23,6 +23,8 @@ public final class Lattice {
   private final StateSpace states;
   private final boolean splitsByCapital;
   private final double[] unknownScores;
+  /** {@link #unknownPlan} for lower-case (0) and capitalised (1) unknown words. */
+  private final int[][] unknownPlan;
   private char[] lowerCased = new char[32];
   private int size;
   private int[] candidateStart = new int[65];
@@ -47,6 +49,7 @@ public final class Lattice {
     this.splitsByCapital = states.uses(StateSpace.CAPITALISED);
     int open = model.unknownWords().openTagCount();
     this.unknownScores = new double[open];
+    this.unknownPlan = new int[][] {unknownPlan(0), unknownPlan(StateSpace.CAPITALISED)};
   }
 
   public HmmModel model() {
@@ -163,6 +166,38 @@ public final class Lattice {
   private int addUnknown(char[] buf, int off, int len, int flags, int tag, int start) {
     UnknownWordModel unknown = model.unknownWords();
     endingLength[size] = (short) unknown.logEmissions(buf, off, len, unknownScores);
+    if (tag < 0) {
+      int[] plan = unknownPlan[flags == 0 ? 0 : 1];
+      int count = plan.length / 2;
+      ensureCandidateCapacity(start + count);
+      for (int c = 0; c < count; c++) {
+        candidateState[start + c] = plan[2 * c];
+        candidateLogEmission[start + c] = unknownScores[plan[2 * c + 1]];
+        candidateEntry[start + c] = -1;
+      }
+      return start + count;
+    }
+    return addUnknownOfTag(flags, tag, start);
+  }
+
+  /**
+   * The candidate states of an unknown word written with {@code flags}, as (state, open-tag
+   * index) pairs: worked out once per lattice, since they depend on nothing else.
+   */
+  private int[] unknownPlan(int flags) {
+    int end = addUnknownOfTag(flags, -1, 0);
+    int[] plan = new int[2 * end];
+    UnknownWordModel unknown = model.unknownWords();
+    for (int c = 0; c < end; c++) {
+      plan[2 * c] = candidateState[c];
+      plan[2 * c + 1] = unknown.openIndex(states.tagOf(candidateState[c]));
+    }
+    return plan;
+  }
+
+  /** The states of the open tags (of {@code tag} only, unless negative) as candidates from {@code start}; emissions from {@link #unknownScores}. */
+  private int addUnknownOfTag(int flags, int tag, int start) {
+    UnknownWordModel unknown = model.unknownWords();
     int end = start;
     for (int pass = 0; pass < 2 && end == start; pass++) {
       for (int k = 0; k < unknown.openTagCount(); k++) {
