@@ -22,6 +22,7 @@ public final class Lattice {
   private final HmmModel model;
   private final StateSpace states;
   private final boolean splitsByCapital;
+  private final double[] unknownScratch;
   private final double[] unknownScores;
   /** {@link #unknownPlan} for lower-case (0) and capitalised (1) unknown words. */
   private final int[][] unknownPlan;
@@ -48,6 +49,7 @@ public final class Lattice {
     this.states = model.states();
     this.splitsByCapital = states.uses(StateSpace.CAPITALISED);
     int open = model.unknownWords().openTagCount();
+    this.unknownScratch = new double[open];
     this.unknownScores = new double[open];
     this.unknownPlan = new int[][] {unknownPlan(0), unknownPlan(StateSpace.CAPITALISED)};
   }
@@ -165,7 +167,7 @@ public final class Lattice {
 
   private int addUnknown(char[] buf, int off, int len, int flags, int tag, int start) {
     UnknownWordModel unknown = model.unknownWords();
-    endingLength[size] = (short) unknown.logEmissions(buf, off, len, unknownScores);
+    endingLength[size] = (short) unknown.logEmissions(buf, off, len, unknownScratch, unknownScores);
     if (tag < 0) {
       int[] plan = unknownPlan[flags == 0 ? 0 : 1];
       int count = plan.length / 2;

@@ -1,5 +1,7 @@
 package org.wordclass.model;
 
+import java.lang.invoke.MethodHandles;
+import java.lang.invoke.VarHandle;
 import java.util.Arrays;
 
 /**
@@ -18,8 +20,10 @@ import java.util.Arrays;
  * </ul>
  *
  * <p>Only open-class tags, those seen with rare words in training, are candidates. Scoring one
- * word costs one trie step and one pass over the open tags per character of its ending and
- * allocates nothing. Immutable and safe to share between threads.
+ * word costs one trie step per character of its ending and one pass over the open tags; the
+ * first word to reach an ending also pays one pass per character of it and allocates the
+ * ending's scores, which every later word with that ending reads. Safe to share between threads:
+ * its parameters never change, and the scores it keeps are published safely.
  */
 public final class UnknownWordModel {
   private final double theta;
@@ -36,12 +40,16 @@ public final class UnknownWordModel {
    */
   private final int[][] openOfCount;
   /**
-   * Per trie, {@code log P(t | ending)} for every node and open tag ({@code node * openTags +
-   * k}): successive abstraction gives each node one distribution, fixed by the path from the
-   * root, so it is computed once here for all nodes instead of for every unknown token. About 8
-   * bytes per node and open tag.
+   * Per trie and node, {@code log P(t | ending)} over the open tags once a word has reached that
+   * node, else null: successive abstraction gives each node one distribution, fixed by its path
+   * from the root, so it is worked out the first time a word ends there and read back for every
+   * later word, instead of once per unknown token. Filled on demand rather than at load time, so
+   * loading stays fast and only the endings text really has take memory (about 100 bytes each).
+   * Threads may fill the same node at once; they compute the same values, and the release store
+   * and acquire load publish each array whole.
    */
-  private final double[][] nodeLogDistribution;
+  private final double[][][] nodeLogDistribution;
+  private static final VarHandle NODE = MethodHandles.arrayElementVarHandle(double[][].class);
 
   /**
    * @param theta weight of the shorter ending in successive abstraction
@@ -96,33 +104,10 @@ public final class UnknownWordModel {
         openOfCount[t][i] = Math.max(-1, Arrays.binarySearch(this.openTags, tries[t].countTag[i]));
       }
     }
-    this.nodeLogDistribution = new double[tries.length][];
+    this.nodeLogDistribution = new double[tries.length][][];
     for (int t = 0; t < tries.length; t++) {
-      nodeLogDistribution[t] = logDistributions(t);
+      nodeLogDistribution[t] = new double[tries[t].nodeCount()][];
     }
-  }
-
-  /** {@code log P(t | ending)} of every node of trie {@code t}, parents before children (breadth-first order). */
-  private double[] logDistributions(int t) {
-    SuffixTrie trie = tries[t];
-    int k = openTags.length;
-    double[] all = new double[trie.nodeCount() * k];
-    double[] dist = baseDistribution.clone();
-    double[] scratch = new double[k];
-    abstractTo(trie, openOfCount[t], 0, theta, null, dist, scratch);
-    System.arraycopy(dist, 0, all, 0, k);
-    for (int node = 0; node < trie.nodeCount(); node++) {
-      for (int edge = trie.childStart[node]; edge < trie.childStart[node + 1]; edge++) {
-        int child = edge + 1;
-        System.arraycopy(all, node * k, dist, 0, k);
-        abstractTo(trie, openOfCount[t], child, theta, null, dist, scratch);
-        System.arraycopy(dist, 0, all, child * k, k);
-      }
-    }
-    for (int i = 0; i < all.length; i++) {
-      all[i] = Math.log(all[i]);
-    }
-    return all;
   }
 
   /** Number of candidate tags of every unknown word. */
@@ -138,9 +123,10 @@ public final class UnknownWordModel {
   /**
    * Writes {@code log P(word | openTag(k))}, up to a constant shared by all k, into {@code out[k]}.
    *
+   * @param scratch at least {@link #openTagCount()} long; overwritten
    * @return length of the longest ending that was found in the counts
    */
-  public int logEmissions(char[] buf, int off, int len, double[] out) {
+  public int logEmissions(char[] buf, int off, int len, double[] scratch, double[] out) {
     int t = trieOfShape[WordShape.classify(buf, off, len).ordinal()];
     SuffixTrie trie = tries[t];
     int node = 0;
@@ -148,10 +134,17 @@ public final class UnknownWordModel {
     for (int next; depth < Math.min(len, maxSuffixLength) && (next = trie.child(node, buf[off + len - 1 - depth])) >= 0; depth++) {
       node = next;
     }
-    double[] logDistribution = nodeLogDistribution[t];
-    int k = openTags.length;
-    for (int i = 0, from = node * k; i < k; i++) {
-      out[i] = logDistribution[from + i] - logPrior[openTags[i]];
+    double[] logDistribution = (double[]) NODE.getAcquire(nodeLogDistribution[t], node);
+    if (logDistribution == null) {
+      logDistribution = new double[openTags.length];
+      tagDistribution(buf, off, len, theta, null, scratch, logDistribution);
+      for (int i = 0; i < logDistribution.length; i++) {
+        logDistribution[i] = Math.log(logDistribution[i]);
+      }
+      NODE.setRelease(nodeLogDistribution[t], node, logDistribution);
+    }
+    for (int i = 0; i < openTags.length; i++) {
+      out[i] = logDistribution[i] - logPrior[openTags[i]];
     }
     return depth;
   }
@@ -259,7 +252,7 @@ public final class UnknownWordModel {
   public long ramBytesUsed() {
     long bytes = 16L * (openTags.length + logPrior.length);
     for (SuffixTrie t : tries) {
-      bytes += (14L + 8L * openTags.length) * t.nodeCount() + 10L * t.countTag.length;
+      bytes += 18L * t.nodeCount() + 10L * t.countTag.length;
     }
     return bytes;
   }

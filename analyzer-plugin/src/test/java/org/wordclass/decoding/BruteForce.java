@@ -54,7 +54,7 @@ final class BruteForce {
       int n = unknown.openTagCount();
       tags[i] = new int[n];
       logEmissions[i] = new double[n];
-      unknown.logEmissions(token.toCharArray(), 0, token.length(), logEmissions[i]);
+      unknown.logEmissions(token.toCharArray(), 0, token.length(), new double[n], logEmissions[i]);
       for (int k = 0; k < n; k++) {
         tags[i][k] = unknown.openTag(k);
       }

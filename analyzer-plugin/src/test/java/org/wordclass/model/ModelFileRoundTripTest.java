@@ -130,7 +130,7 @@ class ModelFileRoundTripTest {
   private static double[] scores(UnknownWordModel model, String word) {
     int k = model.openTagCount();
     double[] out = new double[k + 1];
-    out[k] = model.logEmissions(word.toCharArray(), 0, word.length(), out);
+    out[k] = model.logEmissions(word.toCharArray(), 0, word.length(), new double[k], out);
     return out;
   }
 }

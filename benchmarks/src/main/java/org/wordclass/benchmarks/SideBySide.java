@@ -1,0 +1,47 @@
+package org.wordclass.benchmarks;
+
+import java.lang.reflect.Method;
+import java.net.URL;
+import java.net.URLClassLoader;
+import java.nio.file.Path;
+import java.util.Locale;
+
+/**
+ * Compares the decoder of several builds in one JVM: each {@code benchmarks.jar} gets a class
+ * loader of its own, and their {@link DecoderPass}es run in turn, pass after pass, so that load
+ * from other users of the machine, the processor's clock and the JIT's state fall on all of them
+ * alike, to well within a second. Prints each build's best CPU time per token after warm-up. The
+ * builds share the processor's caches, so absolute times come out higher than in a JVM of their
+ * own; the comparison between them is the point. Builds from the commit that added this class
+ * on; usage: {@code java -cp benchmarks.jar org.wordclass.benchmarks.SideBySide A.jar B.jar ...}.
+ */
+public final class SideBySide {
+  private static final int WARM_UP = 30;
+  private static final int PASSES = 120;
+
+  private SideBySide() {}
+
+  public static void main(String[] jars) throws Exception {
+    Method[] passes = new Method[jars.length];
+    for (int i = 0; i < jars.length; i++) {
+      URLClassLoader loader = new URLClassLoader(new URL[] {Path.of(jars[i]).toUri().toURL()},
+          ClassLoader.getPlatformClassLoader());
+      Class<?> pass = loader.loadClass(DecoderPass.class.getName());
+      pass.getMethod("prepare").invoke(null);
+      passes[i] = pass.getMethod("pass");
+    }
+    double[][] best = new double[jars.length][];
+    for (int round = 0; round < PASSES; round++) {
+      for (int i = 0; i < jars.length; i++) {
+        double[] times = (double[]) passes[i].invoke(null);
+        if (round >= WARM_UP) {
+          best[i] = best[i] == null ? times : new double[] {Math.min(best[i][0], times[0]), Math.min(best[i][1], times[1])};
+        }
+      }
+    }
+    for (int i = 0; i < jars.length; i++) {
+      System.out.printf(Locale.ROOT, "%-40s fill %6.1f  fill+Viterbi %6.1f  (Viterbi %6.1f) ns/token, x%.2f%n",
+          jars[i], best[i][0], best[i][1], best[i][1] - best[i][0], best[0][1] / best[i][1]);
+    }
+  }
+}
