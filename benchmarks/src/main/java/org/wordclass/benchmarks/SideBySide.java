@@ -12,19 +12,23 @@ import java.util.Locale;
  * from other users of the machine, the processor's clock and the JIT's state fall on all of them
  * alike, to well within a second. Prints each build's best CPU time per token after warm-up. The
  * builds share the processor's caches, so absolute times come out higher than in a JVM of their
- * own; the comparison between them is the point. Builds from the commit that added this class
- * on; usage: {@code java -cp benchmarks.jar org.wordclass.benchmarks.SideBySide A.jar B.jar ...}.
+ * own; the comparison between them is the point. Each build must be a {@code benchmarks.jar}
+ * (one that predates {@link DecoderPass} gets this jar's copy of it, run against the build's own
+ * decoder and model). Usage: {@code java -cp benchmarks.jar org.wordclass.benchmarks.SideBySide
+ * A.jar B.jar ...}; ratios are over the first.
  */
 public final class SideBySide {
   private static final int WARM_UP = 30;
   private static final int PASSES = 120;
+  private static final URL SELF = SideBySide.class.getProtectionDomain().getCodeSource().getLocation();
 
   private SideBySide() {}
 
   public static void main(String[] jars) throws Exception {
     Method[] passes = new Method[jars.length];
     for (int i = 0; i < jars.length; i++) {
-      URLClassLoader loader = new URLClassLoader(new URL[] {Path.of(jars[i]).toUri().toURL()},
+      // the build's own classes first; DecoderPass from this jar where the build predates it
+      URLClassLoader loader = new URLClassLoader(new URL[] {Path.of(jars[i]).toUri().toURL(), SELF},
           ClassLoader.getPlatformClassLoader());
       Class<?> pass = loader.loadClass(DecoderPass.class.getName());
       pass.getMethod("prepare").invoke(null);
