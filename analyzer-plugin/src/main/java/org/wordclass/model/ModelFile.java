@@ -46,7 +46,9 @@ public final class ModelFile {
   public static final String CODEC = "WordClassHmm";
 
   public static final int VERSION_START = 1;
-  public static final int VERSION_CURRENT = VERSION_START;
+  /** Version 2 adds the unknown-word priors of capitalised words. */
+  public static final int VERSION_CAPITALISED_PRIORS = 2;
+  public static final int VERSION_CURRENT = VERSION_CAPITALISED_PRIORS;
 
   /** Largest model file this reader accepts, a guard against reading a wrong file whole. */
   public static final long MAX_FILE_BYTES = 1L << 30;
@@ -140,6 +142,7 @@ public final class ModelFile {
       out.writeVInt(t);
     }
     writeDoubles(out, model.logPrior());
+    writeDoubles(out, model.logPriorCapitalised());
     writeDoubles(out, model.baseDistribution());
     for (int t : model.trieOfShape()) {
       out.writeVInt(t);
@@ -268,7 +271,7 @@ public final class ModelFile {
     double[] logBigram = readFloats(in, limits.count(n * n, 4, "bigram entries"));
     double[] logTrigram = readFloats(in, limits.count(n * n * n, 4, "trigram entries"));
     Lexicon lexicon = readLexicon(in, limits, states.size());
-    UnknownWordModel unknown = readUnknownWords(in, limits, tagCount);
+    UnknownWordModel unknown = readUnknownWords(in, limits, tagCount, version);
     return new HmmModel(order, tags, states, cues, logBigram, logTrigram, lexicon, unknown, provenance);
   }
 
@@ -364,7 +367,8 @@ public final class ModelFile {
     return new Lexicon(entries);
   }
 
-  private static UnknownWordModel readUnknownWords(DataInput in, Limits limits, int tagCount) throws IOException {
+  private static UnknownWordModel readUnknownWords(DataInput in, Limits limits, int tagCount, int version)
+      throws IOException {
     double theta = Double.longBitsToDouble(in.readLong());
     int maxSuffix = in.readVInt();
     int openCount = limits.count(in.readVInt(), 1, "open tags");
@@ -373,6 +377,8 @@ public final class ModelFile {
       open[i] = tagIndex(in.readVInt(), tagCount);
     }
     double[] logPrior = readDoubles(in, limits.count(tagCount, 8, "tag priors"));
+    double[] logPriorCapitalised = version >= VERSION_CAPITALISED_PRIORS
+        ? readDoubles(in, limits.count(tagCount, 8, "tag priors of capitalised words")) : logPrior;
     double[] base = readDoubles(in, limits.count(openCount, 8, "open-tag probabilities"));
     int[] trieOfShape = new int[WordShape.values().length];
     for (int i = 0; i < trieOfShape.length; i++) {
@@ -383,7 +389,7 @@ public final class ModelFile {
     for (int i = 0; i < trieCount; i++) {
       tries[i] = readTrie(in, limits, tagCount);
     }
-    return new UnknownWordModel(theta, maxSuffix, open, logPrior, base, trieOfShape, tries);
+    return new UnknownWordModel(theta, maxSuffix, open, logPrior, logPriorCapitalised, base, trieOfShape, tries);
   }
 
   private static SuffixTrie readTrie(DataInput in, Limits limits, int tagCount) throws IOException {

@@ -13,8 +13,13 @@ import java.util.Arrays;
  *       {@code P(t|l_{n-i+1..n}) = (P^(t|l_{n-i+1..n}) + θ P(t|l_{n-i+2..n})) / (1 + θ)};
  *   <li>each spelling shape (see {@link WordShape}) keeps its own counts, abstracted in turn to
  *       the distribution over all rare words;
- *   <li>the result is inverted with Bayes' rule, {@code P(w|t) ∝ P(t|ending) / P(t)}; the
+ *   <li>the result is inverted with Bayes' rule, {@code P(w|s) ∝ P(s|ending) / P(s)}; the
  *       factor {@code P(ending)} is the same for every tag of a token and cancels in decoding.
+ *       The divisor {@code P(s)} is kept twice, for the states of words written with a capital
+ *       and for the others: where a model splits tags by capitalisation, the state a word can
+ *       take is the tag together with its spelling, and dividing by the tag's prior alone would
+ *       count the capital twice (once in the ending statistics, once in the transitions into
+ *       the capitalised state). Models without that split keep {@code P(t)} in both.
  * </ul>
  *
  * <p>Only open-class tags, those seen with rare words in training, are candidates. Scoring one
@@ -26,6 +31,7 @@ public final class UnknownWordModel {
   private final int maxSuffixLength;
   private final int[] openTags;
   private final double[] logPrior;
+  private final double[] logPriorCapitalised;
   private final double[] baseDistribution;
   private final int[] trieOfShape;
   private final SuffixTrie[] tries;
@@ -40,7 +46,8 @@ public final class UnknownWordModel {
    * @param theta weight of the shorter ending in successive abstraction
    * @param maxSuffixLength longest ending consulted
    * @param openTags tags an unknown word may take, ascending
-   * @param logPrior {@code log P(t)} over all training tokens, one per tag of the tag set
+   * @param logPrior {@code log P(t)} over all training tokens, one per tag of the tag set, the
+   *     divisor for every word
    * @param baseDistribution tag distribution over all rare words, one per open tag, summing to 1
    * @param trieOfShape index into {@code tries} for each {@link WordShape} ordinal
    * @param tries ending counts, one trie per group of shapes
@@ -53,6 +60,32 @@ public final class UnknownWordModel {
       double[] baseDistribution,
       int[] trieOfShape,
       SuffixTrie[] tries) {
+    this(theta, maxSuffixLength, openTags, logPrior, logPrior, baseDistribution, trieOfShape, tries);
+  }
+
+  /**
+   * @param theta weight of the shorter ending in successive abstraction
+   * @param maxSuffixLength longest ending consulted
+   * @param openTags tags an unknown word may take, ascending
+   * @param logPrior the log prior each tag's probability is divided by, one per tag of the tag
+   *     set, for words not written with a capital (or in a state that does not say so)
+   * @param logPriorCapitalised the same for words in the state of words written with a capital
+   * @param baseDistribution tag distribution over all rare words, one per open tag, summing to 1
+   * @param trieOfShape index into {@code tries} for each {@link WordShape} ordinal
+   * @param tries ending counts, one trie per group of shapes
+   */
+  public UnknownWordModel(
+      double theta,
+      int maxSuffixLength,
+      int[] openTags,
+      double[] logPrior,
+      double[] logPriorCapitalised,
+      double[] baseDistribution,
+      int[] trieOfShape,
+      SuffixTrie[] tries) {
+    if (logPriorCapitalised.length != logPrior.length) {
+      throw new IllegalArgumentException("one prior per tag expected for capitalised words as for the others");
+    }
     if (!(theta > 0) || Double.isInfinite(theta)) {
       throw new IllegalArgumentException("suffix weight must be finite and positive: " + theta);
     }
@@ -71,7 +104,8 @@ public final class UnknownWordModel {
       if (openTags[i] < 0 || openTags[i] >= logPrior.length || (i > 0 && openTags[i] <= openTags[i - 1])) {
         throw new IllegalArgumentException("open tags must be distinct ascending tag indexes");
       }
-      if (!(baseDistribution[i] > 0) || Double.isInfinite(logPrior[openTags[i]])) {
+      if (!(baseDistribution[i] > 0) || !Double.isFinite(logPrior[openTags[i]])
+          || !Double.isFinite(logPriorCapitalised[openTags[i]])) {
         throw new IllegalArgumentException("open tag " + openTags[i] + " has no probability mass");
       }
     }
@@ -79,6 +113,7 @@ public final class UnknownWordModel {
     this.maxSuffixLength = maxSuffixLength;
     this.openTags = openTags.clone();
     this.logPrior = logPrior.clone();
+    this.logPriorCapitalised = logPriorCapitalised.clone();
     this.baseDistribution = baseDistribution.clone();
     this.trieOfShape = trieOfShape.clone();
     this.tries = tries.clone();
@@ -102,17 +137,38 @@ public final class UnknownWordModel {
   }
 
   /**
-   * Writes {@code log P(word | openTag(k))}, up to a constant shared by all k, into {@code out[k]}.
+   * Writes {@code log P(word | openTag(k))}, up to a constant shared by all k, into {@code out[k]},
+   * for the states of words written as this one is: with the capitalised prior if its first
+   * character is a capital letter. That is the state a decoder admits for the word everywhere but
+   * as the first word of a sentence, where no word counts as capitalised; {@link
+   * #logEmissions(char[], int, int, boolean, double[], double[])} takes the state's spelling.
    *
    * @param scratch at least {@link #openTagCount()} long; overwritten
    * @return length of the longest ending that was found in the counts
    */
   public int logEmissions(char[] buf, int off, int len, double[] scratch, double[] out) {
+    return logEmissions(buf, off, len, startsWithCapital(buf, off, len), scratch, out);
+  }
+
+  /**
+   * Writes {@code log P(word | state of openTag(k))}, up to a constant shared by all k, into
+   * {@code out[k]}, for the states of words written with a capital in mid-sentence if {@code
+   * capitalisedState}, otherwise for the others.
+   *
+   * @param scratch at least {@link #openTagCount()} long; overwritten
+   * @return length of the longest ending that was found in the counts
+   */
+  public int logEmissions(char[] buf, int off, int len, boolean capitalisedState, double[] scratch, double[] out) {
     int depth = tagDistribution(buf, off, len, theta, null, scratch, out);
+    double[] prior = capitalisedState ? logPriorCapitalised : logPrior;
     for (int i = 0; i < openTags.length; i++) {
-      out[i] = Math.log(out[i]) - logPrior[openTags[i]];
+      out[i] = Math.log(out[i]) - prior[openTags[i]];
     }
     return depth;
+  }
+
+  private static boolean startsWithCapital(char[] buf, int off, int len) {
+    return len > 0 && (Character.isUpperCase(buf[off]) || Character.isTitleCase(buf[off]));
   }
 
   /**
@@ -192,9 +248,23 @@ public final class UnknownWordModel {
     return logPrior;
   }
 
-  /** {@code log P(tag)} over all training tokens. */
+  double[] logPriorCapitalised() {
+    return logPriorCapitalised;
+  }
+
+  /** The log prior {@code tag}'s probability is divided by for words not written with a capital. */
   public double logPrior(int tag) {
     return logPrior[tag];
+  }
+
+  /** The log prior {@code tag}'s probability is divided by for words in the capitalised state. */
+  public double logPriorCapitalised(int tag) {
+    return logPriorCapitalised[tag];
+  }
+
+  /** Whether words written with a capital are divided by other priors than the rest. */
+  public boolean hasCapitalisedPriors() {
+    return !Arrays.equals(logPrior, logPriorCapitalised);
   }
 
   double[] baseDistribution() {
@@ -216,7 +286,7 @@ public final class UnknownWordModel {
 
   /** Approximate heap size in bytes. */
   public long ramBytesUsed() {
-    long bytes = 16L * (openTags.length + logPrior.length);
+    long bytes = 16L * (openTags.length + 2L * logPrior.length);
     for (SuffixTrie t : tries) {
       bytes += 14L * t.nodeCount() + 10L * t.countTag.length;
     }

@@ -60,6 +60,48 @@ class ModelFileRoundTripTest {
     assertArrayEquals(TestModels.bytes(model), TestModels.bytes(withProvenance(model, reversed)));
   }
 
+  /**
+   * A version-1 file (one prior row in the unknown-word model) is still read, its prior serving
+   * words with and without a capital alike. Made from a version-2 file of a model whose two rows
+   * are equal by dropping the second row and writing header and footer of version 1.
+   */
+  @Test
+  void versionOneFileIsReadWithOnePriorForEveryWord() throws IOException {
+    HmmModel small = TestModels.small();
+    UnknownWordModel u = small.unknownWords();
+    UnknownWordModel onePrior = new UnknownWordModel(u.theta(), u.maxSuffixLength(), u.openTags(), u.logPrior(),
+        u.baseDistribution(), u.trieOfShape(), u.tries());
+    HmmModel model = new HmmModel(small.order(), small.tags(), small.states(), small.cues(), small.logBigramTable(),
+        small.logTrigramTable(), small.lexicon(), onePrior, small.provenance());
+    byte[] current = TestModels.bytes(model);
+    byte[] row = new byte[8 * u.logPrior().length];
+    java.nio.ByteBuffer.wrap(row).order(java.nio.ByteOrder.LITTLE_ENDIAN).asDoubleBuffer().put(u.logPrior());
+    int first = indexOf(current, row);
+    int second = first + row.length;
+    assertArrayEquals(row, java.util.Arrays.copyOfRange(current, second, second + row.length), "two equal rows");
+    byte[] body = new byte[current.length - 21 - 16 - row.length];
+    System.arraycopy(current, 21, body, 0, second - 21);
+    System.arraycopy(current, second + row.length, body, second - 21, current.length - 16 - second - row.length);
+    byte[] versionOne = TestModels.withHeaderAndFooter(ModelFile.VERSION_START, out -> out.writeBytes(body, body.length));
+    HmmModel read = ModelFile.read(versionOne, "v1");
+    assertSameModel(model, read);
+    assertArrayEquals(u.logPrior(), read.unknownWords().logPriorCapitalised());
+    assertArrayEquals(current, TestModels.bytes(read), "written again in the current version");
+  }
+
+  private static int indexOf(byte[] haystack, byte[] needle) {
+    outer:
+    for (int i = 0; i + needle.length <= haystack.length; i++) {
+      for (int j = 0; j < needle.length; j++) {
+        if (haystack[i + j] != needle[j]) {
+          continue outer;
+        }
+      }
+      return i;
+    }
+    throw new AssertionError("prior row not found");
+  }
+
   /** The bundled model, read and written again, gives back its own bytes. */
   @Test
   void bundledModelRewritesToTheSameBytes() throws IOException {
@@ -108,6 +150,7 @@ class ModelFileRoundTripTest {
     assertEquals(expected.maxSuffixLength(), actual.maxSuffixLength());
     assertArrayEquals(expected.openTags(), actual.openTags());
     assertArrayEquals(expected.logPrior(), actual.logPrior());
+    assertArrayEquals(expected.logPriorCapitalised(), actual.logPriorCapitalised());
     assertArrayEquals(expected.baseDistribution(), actual.baseDistribution());
     assertArrayEquals(expected.trieOfShape(), actual.trieOfShape());
     assertEquals(expected.tries().length, actual.tries().length);

@@ -157,8 +157,10 @@ public final class TestModels {
     SuffixTrie.Builder upper = new SuffixTrie.Builder();
     upper.add("Bern", 1, 5, 4);
     int[] trieOfShape = {0, 1, 1, 0, 0};
+    // words written with a capital are divided by other priors than the rest, as with capitalisation states
     return new UnknownWordModel(0.75, 4, new int[] {1, 2}, new double[] {Math.log(0.4), Math.log(0.35), Math.log(0.25)},
-        new double[] {0.6, 0.4}, trieOfShape, new SuffixTrie[] {lower.build(), upper.build()});
+        new double[] {Math.log(0.5), Math.log(0.45), Math.log(0.05)}, new double[] {0.6, 0.4}, trieOfShape,
+        new SuffixTrie[] {lower.build(), upper.build()});
   }
 
   /** The bytes {@link ModelFile#write(HmmModel, IndexOutput)} produces for {@code model}. */

@@ -77,16 +77,36 @@ final class TrainingOptionsMixin {
           + "--order 1 (see docs/latent-states.md). Default: ${DEFAULT-VALUE}.")
   int latentRounds;
 
+  @Option(names = "--unknown-word-prior", paramLabel = "tag|state|lower-case-state|rare-tag|rare-state",
+      description = "What an unknown word's class probability from its ending is divided by to score it: the "
+          + "class's share of all training words (tag), the share of its hidden state, which also says "
+          + "whether the word is written with a capital (state), the state's for words written without a "
+          + "capital and the class's for the others (lower-case-state), or either share among rare words only "
+          + "(rare-tag, rare-state). Default: ${DEFAULT-VALUE}.")
+  String unknownWordPrior;
+
   /** The options given; a value the estimator refuses is reported as a usage error. */
   TrainingOptions toOptions() {
     try {
       TrainingOptions options = new TrainingOptions(order, maxSuffixLength, rareWordMaxCount,
           TrainingOptions.SuffixWeightRule.HELD_OUT, Double.NaN, openClassMinShare, shapeClasses,
-          capitalisationStates, contextEmissions, lowercaseFirstWord, contextMinCount, latentRounds);
+          capitalisationStates, contextEmissions, lowercaseFirstWord, contextMinCount, latentRounds,
+          unknownWordPrior(unknownWordPrior));
       return withSuffixWeight(options, suffixWeight);
     } catch (IllegalArgumentException e) {
       throw new ParameterException(mixee.commandLine(), "Invalid training option: " + e.getMessage());
     }
+  }
+
+  /** Reads a prior's name as {@link TrainingOptions#describe()} writes it. */
+  private TrainingOptions.UnknownWordPrior unknownWordPrior(String value) {
+    for (TrainingOptions.UnknownWordPrior prior : TrainingOptions.UnknownWordPrior.values()) {
+      if (value.equalsIgnoreCase(prior.name().replace('_', '-'))) {
+        return prior;
+      }
+    }
+    throw new ParameterException(mixee.commandLine(),
+        "Invalid value for --unknown-word-prior: '" + value + "' is not one of tag, state, lower-case-state, rare-tag, rare-state");
   }
 
   /** Reads a rule name or a number. */

@@ -177,10 +177,9 @@ public final class HmmEstimator {
       long[] tagTokens, TagSet tagSet) {
     int tagCount = tagSet.size();
     long total = Arrays.stream(tagTokens).sum();
-    double[] logPrior = new double[tagCount];
-    for (int t = 0; t < tagCount; t++) {
-      logPrior[t] = Math.log((double) tagTokens[t] / total);
-    }
+    double[][] priors = unknownWordPriors(counts, finalId, tagTokens, tagCount);
+    double[] logPrior = priors[0];
+    double[] logPriorCapitalised = priors[1];
     int[] openTags = openTags(wordTags, finalId, tagCount);
     int[] trieOfShape = trieOfShape();
     int trieCount = Arrays.stream(trieOfShape).max().getAsInt() + 1;
@@ -218,13 +217,49 @@ public final class HmmEstimator {
     for (int i = 0; i < trieCount; i++) {
       tries[i] = builders[i].build();
     }
-    UnknownWordModel model = new UnknownWordModel(1.0, options.maxSuffixLength(), openTags, logPrior, base, trieOfShape, tries);
+    UnknownWordModel model = new UnknownWordModel(1.0, options.maxSuffixLength(), openTags, logPrior,
+        logPriorCapitalised, base, trieOfShape, tries);
     double theta = switch (options.suffixWeightRule()) {
       case HELD_OUT -> SuffixWeightSelection.choose(model, wordTags, finalId, options.rareWordMaxCount());
       case TAG_SPREAD -> tagProbabilitySpread(tagTokens, total);
       case FIXED -> options.suffixWeight();
     };
-    return new UnknownWordModel(theta, options.maxSuffixLength(), openTags, logPrior, base, trieOfShape, tries);
+    return new UnknownWordModel(theta, options.maxSuffixLength(), openTags, logPrior, logPriorCapitalised, base,
+        trieOfShape, tries);
+  }
+
+  /**
+   * The log priors an unknown word's tag probability is divided by, for words not written with a
+   * capital in mid-sentence ([0]) and for those that are ([1]), as {@link
+   * TrainingOptions#unknownWordPrior()} says: the tag's or the state's share of all tokens or of
+   * the tokens of rare words. Without capitalisation states a state is a tag, and both are the
+   * tag's. A tag never seen in the counted tokens (a closed class among rare words) gets the
+   * share of half a token, so that its prior stays finite.
+   */
+  double[][] unknownWordPriors(TagCounts counts, int[] finalId, long[] tagTokens, int tagCount) {
+    TrainingOptions.UnknownWordPrior rule = options.unknownWordPrior();
+    boolean rareOnly = rule == TrainingOptions.UnknownWordPrior.RARE_TAG
+        || rule == TrainingOptions.UnknownWordPrior.RARE_STATE;
+    boolean byState = options.capitalisationStates() && (rule == TrainingOptions.UnknownWordPrior.STATE
+        || rule == TrainingOptions.UnknownWordPrior.RARE_STATE || rule == TrainingOptions.UnknownWordPrior.LOWER_CASE_STATE);
+    boolean capitalisedByTag = rule == TrainingOptions.UnknownWordPrior.LOWER_CASE_STATE;
+    long[][] tokens = new long[2][tagCount];
+    for (Map<Integer, Integer> states : counts.wordStates().values()) {
+      if (rareOnly && states.values().stream().mapToInt(Integer::intValue).sum() > options.rareWordMaxCount()) {
+        continue;
+      }
+      states.forEach((raw, count) -> tokens[byState && TagCounts.isCapitalised(raw) ? 1 : 0]
+          [finalId[TagCounts.tagOfRawState(raw) + 1]] += count);
+    }
+    long total = Arrays.stream(tokens[0]).sum() + Arrays.stream(tokens[1]).sum();
+    double[][] logPriors = new double[2][tagCount];
+    for (int c = 0; c < 2; c++) {
+      for (int t = 0; t < tagCount; t++) {
+        long n = !byState ? tokens[0][t] : c == 1 && capitalisedByTag ? tokens[0][t] + tokens[1][t] : tokens[c][t];
+        logPriors[c][t] = Math.log(Math.max(n, 0.5) / total);
+      }
+    }
+    return logPriors;
   }
 
   /** Tags carried by at least the configured share of the words seen exactly once. */

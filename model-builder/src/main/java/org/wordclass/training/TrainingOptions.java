@@ -30,6 +30,9 @@ import java.util.Map;
  *     fits the halves to the tagged corpus by EM and merges back the splits that help least (see
  *     {@code LatentStates}); 0 keeps the states of the supervised model. A model with latent
  *     states has no context-dependent emissions, whatever {@code contextEmissions} says
+ * @param unknownWordPrior what the suffix model's {@code P(t | ending)} is divided by to give an
+ *     unknown word's emission: the prior of the tag or of the hidden state, over all tokens or
+ *     over rare words
  */
 public record TrainingOptions(
     int order,
@@ -43,10 +46,12 @@ public record TrainingOptions(
     boolean contextEmissions,
     boolean lowercaseFirstWord,
     int contextMinCount,
-    int latentRounds) {
+    int latentRounds,
+    UnknownWordPrior unknownWordPrior) {
 
   public static final TrainingOptions DEFAULTS =
-      new TrainingOptions(2, 10, 10, SuffixWeightRule.HELD_OUT, Double.NaN, 0.002, false, true, true, true, 3, 0);
+      new TrainingOptions(2, 10, 10, SuffixWeightRule.HELD_OUT, Double.NaN, 0.002, false, true, true, true, 3, 0,
+          UnknownWordPrior.LOWER_CASE_STATE);
 
   /** The classic second-order model with a suffix model and none of the later cues. */
   public static final TrainingOptions CLASSIC = DEFAULTS.withCues(false, false, false);
@@ -61,7 +66,33 @@ public record TrainingOptions(
     FIXED
   }
 
+  /**
+   * What an unknown word's tag probability from its ending is divided by to become an emission
+   * ({@code P(w|s) ∝ P(s|w) / P(s)}, Bayes' rule).
+   */
+  public enum UnknownWordPrior {
+    /** {@code P(t)}, the tag's share of all training tokens, whatever the state (Brants 2000). */
+    TAG,
+    /**
+     * {@code P(s)}, the share of the hidden state: the tag together with whether the word is
+     * written with a capital, the state the decoder admits for the word.
+     */
+    STATE,
+    /**
+     * {@code P(s)} for words not written with a capital, {@code P(t)} for the others: the
+     * state's prior where the spelling alone says the state, whatever the word's place.
+     */
+    LOWER_CASE_STATE,
+    /** {@code P(t)} over the tokens of rare words only. */
+    RARE_TAG,
+    /** {@code P(s)} over the tokens of rare words only. */
+    RARE_STATE
+  }
+
   public TrainingOptions {
+    if (unknownWordPrior == null) {
+      throw new IllegalArgumentException("an unknown-word prior must be given");
+    }
     if (order != 1 && order != 2) {
       throw new IllegalArgumentException("order must be 1 or 2, not " + order);
     }
@@ -87,46 +118,53 @@ public record TrainingOptions(
 
   public TrainingOptions withOrder(int newOrder) {
     return new TrainingOptions(newOrder, maxSuffixLength, rareWordMaxCount, suffixWeightRule, suffixWeight,
-        openClassMinShare, shapeClasses, capitalisationStates, contextEmissions, lowercaseFirstWord, contextMinCount, latentRounds);
+        openClassMinShare, shapeClasses, capitalisationStates, contextEmissions, lowercaseFirstWord, contextMinCount, latentRounds, unknownWordPrior);
   }
 
   /** A fixed θ. */
   public TrainingOptions withSuffixWeight(double weight) {
     return new TrainingOptions(order, maxSuffixLength, rareWordMaxCount, SuffixWeightRule.FIXED, weight,
-        openClassMinShare, shapeClasses, capitalisationStates, contextEmissions, lowercaseFirstWord, contextMinCount, latentRounds);
+        openClassMinShare, shapeClasses, capitalisationStates, contextEmissions, lowercaseFirstWord, contextMinCount, latentRounds, unknownWordPrior);
   }
 
   /** θ chosen by a rule rather than given. */
   public TrainingOptions withSuffixWeightRule(SuffixWeightRule rule) {
     return new TrainingOptions(order, maxSuffixLength, rareWordMaxCount, rule, Double.NaN,
-        openClassMinShare, shapeClasses, capitalisationStates, contextEmissions, lowercaseFirstWord, contextMinCount, latentRounds);
+        openClassMinShare, shapeClasses, capitalisationStates, contextEmissions, lowercaseFirstWord, contextMinCount, latentRounds, unknownWordPrior);
   }
 
   public TrainingOptions withShapeClasses(boolean shapes) {
     return new TrainingOptions(order, maxSuffixLength, rareWordMaxCount, suffixWeightRule, suffixWeight,
-        openClassMinShare, shapes, capitalisationStates, contextEmissions, lowercaseFirstWord, contextMinCount, latentRounds);
+        openClassMinShare, shapes, capitalisationStates, contextEmissions, lowercaseFirstWord, contextMinCount, latentRounds, unknownWordPrior);
   }
 
   public TrainingOptions withSuffix(int maxLength, int rareMaxCount) {
     return new TrainingOptions(order, maxLength, rareMaxCount, suffixWeightRule, suffixWeight,
-        openClassMinShare, shapeClasses, capitalisationStates, contextEmissions, lowercaseFirstWord, contextMinCount, latentRounds);
+        openClassMinShare, shapeClasses, capitalisationStates, contextEmissions, lowercaseFirstWord, contextMinCount, latentRounds, unknownWordPrior);
   }
 
   public TrainingOptions withOpenClassMinShare(double share) {
     return new TrainingOptions(order, maxSuffixLength, rareWordMaxCount, suffixWeightRule, suffixWeight,
-        share, shapeClasses, capitalisationStates, contextEmissions, lowercaseFirstWord, contextMinCount, latentRounds);
+        share, shapeClasses, capitalisationStates, contextEmissions, lowercaseFirstWord, contextMinCount, latentRounds, unknownWordPrior);
   }
 
   /** The three cues beyond the classic model, each on or off. */
   public TrainingOptions withCues(boolean capitalisation, boolean context, boolean lowercaseFirst) {
     return new TrainingOptions(order, maxSuffixLength, rareWordMaxCount, suffixWeightRule, suffixWeight,
-        openClassMinShare, shapeClasses, capitalisation, context, lowercaseFirst, contextMinCount, latentRounds);
+        openClassMinShare, shapeClasses, capitalisation, context, lowercaseFirst, contextMinCount, latentRounds, unknownWordPrior);
   }
 
   /** Rounds of latent sub-state splitting (0 for none). */
   public TrainingOptions withLatentRounds(int rounds) {
     return new TrainingOptions(order, maxSuffixLength, rareWordMaxCount, suffixWeightRule, suffixWeight,
-        openClassMinShare, shapeClasses, capitalisationStates, contextEmissions, lowercaseFirstWord, contextMinCount, rounds);
+        openClassMinShare, shapeClasses, capitalisationStates, contextEmissions, lowercaseFirstWord, contextMinCount, rounds, unknownWordPrior);
+  }
+
+  /** What the ending-based tag probability of an unknown word is divided by. */
+  public TrainingOptions withUnknownWordPrior(UnknownWordPrior prior) {
+    return new TrainingOptions(order, maxSuffixLength, rareWordMaxCount, suffixWeightRule, suffixWeight,
+        openClassMinShare, shapeClasses, capitalisationStates, contextEmissions, lowercaseFirstWord, contextMinCount,
+        latentRounds, prior);
   }
 
   /** The options as provenance entries. */
@@ -144,6 +182,7 @@ public record TrainingOptions(
     m.put("option.lowercaseFirstWord", Boolean.toString(lowercaseFirstWord));
     m.put("option.contextMinCount", Integer.toString(contextMinCount));
     m.put("option.latentRounds", Integer.toString(latentRounds));
+    m.put("option.unknownWordPrior", unknownWordPrior.name().toLowerCase(Locale.ROOT).replace('_', '-'));
     return m;
   }
 }
