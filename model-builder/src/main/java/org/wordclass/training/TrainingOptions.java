@@ -54,7 +54,8 @@ public record TrainingOptions(
           UnknownWordPrior.LOWER_CASE_STATE);
 
   /** The classic second-order model with a suffix model and none of the later cues. */
-  public static final TrainingOptions CLASSIC = DEFAULTS.withCues(false, false, false);
+  public static final TrainingOptions CLASSIC =
+      DEFAULTS.withCues(false, false, false).withUnknownWordPrior(UnknownWordPrior.TAG);
 
   /** How θ of the suffix model is chosen. */
   public enum SuffixWeightRule {
