@@ -46,7 +46,10 @@ public final class ModelFile {
   public static final String CODEC = "WordClassHmm";
 
   public static final int VERSION_START = 1;
-  /** Version 2 adds the unknown-word priors of capitalised words. */
+  /**
+   * Version 2 adds the unknown-word priors of capitalised words and the cue of the lower-case
+   * forms of capitalised words.
+   */
   public static final int VERSION_CAPITALISED_PRIORS = 2;
   public static final int VERSION_CURRENT = VERSION_CAPITALISED_PRIORS;
 
@@ -150,6 +153,12 @@ public final class ModelFile {
     out.writeVInt(model.tries().length);
     for (SuffixTrie trie : model.tries()) {
       writeTrie(out, trie);
+    }
+    LowerCaseFormCue cue = model.lowerCaseForms();
+    out.writeByte((byte) (cue == null ? 0 : 1));
+    if (cue != null) {
+      writeDoubles(out, cue.logStatePrior());
+      writeDoubles(out, cue.factors());
     }
   }
 
@@ -271,7 +280,7 @@ public final class ModelFile {
     double[] logBigram = readFloats(in, limits.count(n * n, 4, "bigram entries"));
     double[] logTrigram = readFloats(in, limits.count(n * n * n, 4, "trigram entries"));
     Lexicon lexicon = readLexicon(in, limits, states.size());
-    UnknownWordModel unknown = readUnknownWords(in, limits, tagCount, version);
+    UnknownWordModel unknown = readUnknownWords(in, limits, tagCount, version, lexicon, states);
     return new HmmModel(order, tags, states, cues, logBigram, logTrigram, lexicon, unknown, provenance);
   }
 
@@ -367,7 +376,8 @@ public final class ModelFile {
     return new Lexicon(entries);
   }
 
-  private static UnknownWordModel readUnknownWords(DataInput in, Limits limits, int tagCount, int version)
+  private static UnknownWordModel readUnknownWords(DataInput in, Limits limits, int tagCount, int version, Lexicon lexicon,
+      StateSpace states)
       throws IOException {
     double theta = Double.longBitsToDouble(in.readLong());
     int maxSuffix = in.readVInt();
@@ -389,7 +399,13 @@ public final class ModelFile {
     for (int i = 0; i < trieCount; i++) {
       tries[i] = readTrie(in, limits, tagCount);
     }
-    return new UnknownWordModel(theta, maxSuffix, open, logPrior, logPriorCapitalised, base, trieOfShape, tries);
+    LowerCaseFormCue cue = null;
+    if (version >= VERSION_CAPITALISED_PRIORS && in.readByte() != 0) {
+      double[] logStatePrior = readDoubles(in, limits.count(states.size(), 8, "state priors"));
+      double[] factors = readDoubles(in, limits.count((long) tagCount * openCount, 8, "lower-case form factors"));
+      cue = new LowerCaseFormCue(logStatePrior, factors, tagCount, openCount, lexicon, states);
+    }
+    return new UnknownWordModel(theta, maxSuffix, open, logPrior, logPriorCapitalised, base, trieOfShape, tries, cue);
   }
 
   private static SuffixTrie readTrie(DataInput in, Limits limits, int tagCount) throws IOException {

@@ -34,6 +34,7 @@ public final class UnknownWordModel {
   private final double[] logPriorCapitalised;
   private final double[] baseDistribution;
   private final int[] trieOfShape;
+  private final LowerCaseFormCue lowerCaseForms;
   private final SuffixTrie[] tries;
   /**
    * Per trie, per count entry: the index of its tag among the open tags, or -1 for a closed
@@ -83,6 +84,23 @@ public final class UnknownWordModel {
       double[] baseDistribution,
       int[] trieOfShape,
       SuffixTrie[] tries) {
+    this(theta, maxSuffixLength, openTags, logPrior, logPriorCapitalised, baseDistribution, trieOfShape, tries, null);
+  }
+
+  /**
+   * A model that also uses the lower-case form of capitalised words, where {@code lowerCaseForms}
+   * is not null; the other parameters as above.
+   */
+  public UnknownWordModel(
+      double theta,
+      int maxSuffixLength,
+      int[] openTags,
+      double[] logPrior,
+      double[] logPriorCapitalised,
+      double[] baseDistribution,
+      int[] trieOfShape,
+      SuffixTrie[] tries,
+      LowerCaseFormCue lowerCaseForms) {
     if (logPriorCapitalised.length != logPrior.length) {
       throw new IllegalArgumentException("one prior per tag expected for capitalised words as for the others");
     }
@@ -116,6 +134,7 @@ public final class UnknownWordModel {
     this.logPriorCapitalised = logPriorCapitalised.clone();
     this.baseDistribution = baseDistribution.clone();
     this.trieOfShape = trieOfShape.clone();
+    this.lowerCaseForms = lowerCaseForms;
     this.tries = tries.clone();
     this.openOfCount = new int[tries.length][];
     for (int t = 0; t < tries.length; t++) {
@@ -160,6 +179,9 @@ public final class UnknownWordModel {
    */
   public int logEmissions(char[] buf, int off, int len, boolean capitalisedState, double[] scratch, double[] out) {
     int depth = tagDistribution(buf, off, len, theta, null, scratch, out);
+    if (lowerCaseForms != null) {
+      lowerCaseForms.apply(buf, off, len, out);
+    }
     double[] prior = capitalisedState ? logPriorCapitalised : logPrior;
     for (int i = 0; i < openTags.length; i++) {
       out[i] = Math.log(out[i]) - prior[openTags[i]];
@@ -279,6 +301,11 @@ public final class UnknownWordModel {
     return tries;
   }
 
+  /** The cue of the lower-case forms of capitalised words, or null if the model has none. */
+  public LowerCaseFormCue lowerCaseForms() {
+    return lowerCaseForms;
+  }
+
   /** The ending counts words of {@code shape} are scored with; shapes may share one. */
   public SuffixTrie suffixTrie(WordShape shape) {
     return tries[trieOfShape[shape.ordinal()]];
@@ -289,6 +316,9 @@ public final class UnknownWordModel {
     long bytes = 16L * (openTags.length + 2L * logPrior.length);
     for (SuffixTrie t : tries) {
       bytes += 14L * t.nodeCount() + 10L * t.countTag.length;
+    }
+    if (lowerCaseForms != null) {
+      bytes += lowerCaseForms.ramBytesUsed();
     }
     return bytes;
   }

@@ -92,6 +92,12 @@ class DocumentedLayoutTest {
     for (SuffixTrie trie : u.tries()) {
       trie(trie);
     }
+    LowerCaseFormCue cue = u.lowerCaseForms();
+    assertEquals(cue == null ? 0 : 1, in.get());
+    if (cue != null) {
+      assertArrayEquals(cue.logStatePrior(), doubles(model.states().size()));
+      assertArrayEquals(cue.factors(), doubles(model.tags().size() * u.openTagCount()));
+    }
   }
 
   /** Breadth-first nodes: counts, then child characters; edge e leads to node e + 1. */

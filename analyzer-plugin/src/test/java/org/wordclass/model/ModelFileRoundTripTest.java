@@ -19,7 +19,8 @@ import org.wordclass.testing.TestModels;
 /** Writing and reading a model file gives back the same model; the same model gives the same bytes. */
 class ModelFileRoundTripTest {
   /** Words whose unknown-word scores are compared, one or more per shape and ending in the tries. */
-  private static final List<String> PROBES = List.of("walked", "talked", "stable", "Bern", "BERN", "x", "", "42", "...", "ending");
+  private static final List<String> PROBES = List.of("walked", "talked", "stable", "Bern", "BERN", "x", "", "42", "...", "ending",
+      "Walks", "RUN", "The");
 
   @TempDir Path dir;
 
@@ -61,9 +62,10 @@ class ModelFileRoundTripTest {
   }
 
   /**
-   * A version-1 file (one prior row in the unknown-word model) is still read, its prior serving
-   * words with and without a capital alike. Made from a version-2 file of a model whose two rows
-   * are equal by dropping the second row and writing header and footer of version 1.
+   * A version-1 file (one prior row in the unknown-word model, no lower-case forms) is still
+   * read, its prior serving words with and without a capital alike. Made from a version-2 file
+   * of a model whose two rows are equal and which has no lower-case forms, by dropping the second
+   * row and the flag byte and writing header and footer of version 1.
    */
   @Test
   void versionOneFileIsReadWithOnePriorForEveryWord() throws IOException {
@@ -79,9 +81,11 @@ class ModelFileRoundTripTest {
     int first = indexOf(current, row);
     int second = first + row.length;
     assertArrayEquals(row, java.util.Arrays.copyOfRange(current, second, second + row.length), "two equal rows");
-    byte[] body = new byte[current.length - 21 - 16 - row.length];
+    // version 1 has neither the second row nor the flag byte of lower-case forms, the body's last byte
+    assertEquals(0, current[current.length - 17], "no lower-case forms");
+    byte[] body = new byte[current.length - 21 - 16 - row.length - 1];
     System.arraycopy(current, 21, body, 0, second - 21);
-    System.arraycopy(current, second + row.length, body, second - 21, current.length - 16 - second - row.length);
+    System.arraycopy(current, second + row.length, body, second - 21, current.length - 17 - second - row.length);
     byte[] versionOne = TestModels.withHeaderAndFooter(ModelFile.VERSION_START, out -> out.writeBytes(body, body.length));
     HmmModel read = ModelFile.read(versionOne, "v1");
     assertSameModel(model, read);
@@ -151,6 +155,12 @@ class ModelFileRoundTripTest {
     assertArrayEquals(expected.openTags(), actual.openTags());
     assertArrayEquals(expected.logPrior(), actual.logPrior());
     assertArrayEquals(expected.logPriorCapitalised(), actual.logPriorCapitalised());
+    assertEquals(expected.lowerCaseForms() == null, actual.lowerCaseForms() == null);
+    if (expected.lowerCaseForms() != null) {
+      assertArrayEquals(expected.lowerCaseForms().logStatePrior(), actual.lowerCaseForms().logStatePrior());
+      assertArrayEquals(expected.lowerCaseForms().factors(), actual.lowerCaseForms().factors());
+      assertEquals(expected.lowerCaseForms().forms().size(), actual.lowerCaseForms().forms().size());
+    }
     assertArrayEquals(expected.baseDistribution(), actual.baseDistribution());
     assertArrayEquals(expected.trieOfShape(), actual.trieOfShape());
     assertEquals(expected.tries().length, actual.tries().length);

@@ -85,13 +85,18 @@ final class TrainingOptionsMixin {
           + "(rare-tag, rare-state). Default: ${DEFAULT-VALUE}.")
   String unknownWordPrior;
 
+  @Option(names = "--lower-case-forms", negatable = true, fallbackValue = "true",
+      description = "Weigh the classes of an unknown word written with a capital by what its lower-case form "
+          + "mostly is, where that form is a known word (Customer by customer, a noun). Default: ${DEFAULT-VALUE}.")
+  boolean lowerCaseForms;
+
   /** The options given; a value the estimator refuses is reported as a usage error. */
   TrainingOptions toOptions() {
     try {
       TrainingOptions options = new TrainingOptions(order, maxSuffixLength, rareWordMaxCount,
           TrainingOptions.SuffixWeightRule.HELD_OUT, Double.NaN, openClassMinShare, shapeClasses,
           capitalisationStates, contextEmissions, lowercaseFirstWord, contextMinCount, latentRounds,
-          unknownWordPrior(unknownWordPrior));
+          unknownWordPrior(unknownWordPrior), lowerCaseForms);
       return withSuffixWeight(options, suffixWeight);
     } catch (IllegalArgumentException e) {
       throw new ParameterException(mixee.commandLine(), "Invalid training option: " + e.getMessage());

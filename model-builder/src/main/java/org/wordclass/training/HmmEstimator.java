@@ -8,6 +8,8 @@ import java.util.Map;
 import java.util.TreeMap;
 import org.wordclass.model.HmmModel;
 import org.wordclass.model.Lexicon;
+import org.wordclass.model.LowerCaseFormCue;
+import org.wordclass.model.LowerCaseForms;
 import org.wordclass.model.SuffixTrie;
 import org.wordclass.model.TagSet;
 import org.wordclass.model.UnknownWordModel;
@@ -70,7 +72,8 @@ public final class HmmEstimator {
     long[] tagTokens = new long[tagCount];
     wordTags.values().forEach(tags -> tags.forEach((tag, count) -> tagTokens[finalId[tag + 1]] += count));
     List<Lexicon.Entry> entries = lexiconEntries(counts, plan, tri, n);
-    UnknownWordModel unknown = unknownWordModel(counts, wordTags, finalId, tagTokens, tagSet);
+    Lexicon lexicon = new Lexicon(entries);
+    UnknownWordModel unknown = unknownWordModel(counts, wordTags, finalId, tagTokens, tagSet, lexicon, plan);
     HmmModel.DecodingCues cues = new HmmModel.DecodingCues(options.lowercaseFirstWord(),
         options.contextEmissions() ? Math.log(1 - contextWeight(0)) : 0);
 
@@ -82,7 +85,7 @@ public final class HmmEstimator {
     all.put("smoothing.bigramWeights", transitions.describeBigramWeights());
     all.put("smoothing.suffixWeight", Double.toString(unknown.theta()));
     HmmModel model = new HmmModel(options.order(), tagSet, plan.space(), cues, transitions.logBigram(),
-        transitions.logTrigram(), new Lexicon(entries), unknown, all);
+        transitions.logTrigram(), lexicon, unknown, all);
     return options.latentRounds() == 0 ? model : withLatentStates(model, counts);
   }
 
@@ -174,7 +177,7 @@ public final class HmmEstimator {
   }
 
   private UnknownWordModel unknownWordModel(TagCounts counts, Map<String, Map<Integer, Integer>> wordTags, int[] finalId,
-      long[] tagTokens, TagSet tagSet) {
+      long[] tagTokens, TagSet tagSet, Lexicon lexicon, StatePlan plan) {
     int tagCount = tagSet.size();
     long total = Arrays.stream(tagTokens).sum();
     double[][] priors = unknownWordPriors(counts, finalId, tagTokens, tagCount);
@@ -224,8 +227,61 @@ public final class HmmEstimator {
       case TAG_SPREAD -> tagProbabilitySpread(tagTokens, total);
       case FIXED -> options.suffixWeight();
     };
+    LowerCaseFormCue cue = options.lowerCaseForms()
+        ? lowerCaseFormCue(counts, wordTags, finalId, openTags, tagCount, lexicon, plan) : null;
     return new UnknownWordModel(theta, options.maxSuffixLength(), openTags, logPrior, logPriorCapitalised, base,
-        trieOfShape, tries);
+        trieOfShape, tries, cue);
+  }
+
+  /**
+   * The factors of {@link LowerCaseFormCue}, counted over the rare training words written with a
+   * capital: for each tag X, {@code P(t | lower-case form mostly X) / P(t)} among them, where
+   * {@code P(t | X)} is smoothed towards {@code P(t)} with the weight of half a word per open tag,
+   * so that a tag X seen with few such words keeps factors near 1.
+   */
+  private LowerCaseFormCue lowerCaseFormCue(TagCounts counts, Map<String, Map<Integer, Integer>> wordTags, int[] finalId,
+      int[] openTags, int tagCount, Lexicon lexicon, StatePlan plan) {
+    int open = openTags.length;
+    long[] stateTokens = new long[plan.size()];
+    counts.wordStates().values().forEach(states -> states.forEach((raw, n) -> stateTokens[plan.stateOf(raw)] += n));
+    long total = Arrays.stream(stateTokens).sum();
+    double[] logStatePrior = new double[plan.size()];
+    for (int s = 0; s < plan.size(); s++) {
+      logStatePrior[s] = Math.log((double) stateTokens[s] / total);
+    }
+    LowerCaseForms forms = new LowerCaseForms(lexicon, plan.space(), logStatePrior);
+    double[] all = new double[open];
+    double[][] byForm = new double[tagCount][open];
+    for (Map.Entry<String, Map<Integer, Integer>> word : new TreeMap<>(wordTags).entrySet()) {
+      Map<Integer, Integer> tags = word.getValue();
+      char[] chars = word.getKey().toCharArray();
+      if (tags.values().stream().mapToInt(Integer::intValue).sum() > options.rareWordMaxCount()
+          || WordShape.classify(chars, 0, chars.length).capitalisationOnly() != WordShape.CAPITALISED) {
+        continue;
+      }
+      int form = forms.tagOfLowerCased(chars, 0, chars.length);
+      for (Map.Entry<Integer, Integer> e : tags.entrySet()) {
+        int k = Arrays.binarySearch(openTags, finalId[e.getKey() + 1]);
+        if (k >= 0) {
+          all[k] += e.getValue();
+          if (form >= 0) {
+            byForm[form][k] += e.getValue();
+          }
+        }
+      }
+    }
+    double pseudo = 0.5 * open;
+    double allTotal = Arrays.stream(all).sum();
+    double[] factors = new double[tagCount * open];
+    for (int x = 0; x < tagCount; x++) {
+      double rowTotal = Arrays.stream(byForm[x]).sum();
+      for (int k = 0; k < open; k++) {
+        double p = (all[k] + 0.5) / (allTotal + pseudo);
+        double q = (byForm[x][k] + pseudo * p) / (rowTotal + pseudo);
+        factors[x * open + k] = q / p;
+      }
+    }
+    return new LowerCaseFormCue(logStatePrior, factors, tagCount, open, lexicon, plan.space());
   }
 
   /**

@@ -33,6 +33,9 @@ import java.util.Map;
  * @param unknownWordPrior what the suffix model's {@code P(t | ending)} is divided by to give an
  *     unknown word's emission: the prior of the tag or of the hidden state, over all tokens or
  *     over rare words
+ * @param lowerCaseForms weigh the tags of an unknown capitalised word by what its lower-case
+ *     form, where known, mostly is ("Customer" by "customer", a noun); see {@code
+ *     org.wordclass.model.LowerCaseFormCue}
  */
 public record TrainingOptions(
     int order,
@@ -47,15 +50,16 @@ public record TrainingOptions(
     boolean lowercaseFirstWord,
     int contextMinCount,
     int latentRounds,
-    UnknownWordPrior unknownWordPrior) {
+    UnknownWordPrior unknownWordPrior,
+    boolean lowerCaseForms) {
 
   public static final TrainingOptions DEFAULTS =
       new TrainingOptions(2, 10, 10, SuffixWeightRule.HELD_OUT, Double.NaN, 0.002, false, true, true, true, 3, 0,
-          UnknownWordPrior.LOWER_CASE_STATE);
+          UnknownWordPrior.LOWER_CASE_STATE, true);
 
   /** The classic second-order model with a suffix model and none of the later cues. */
   public static final TrainingOptions CLASSIC =
-      DEFAULTS.withCues(false, false, false).withUnknownWordPrior(UnknownWordPrior.TAG);
+      DEFAULTS.withCues(false, false, false).withUnknownWordPrior(UnknownWordPrior.TAG).withLowerCaseForms(false);
 
   /** How θ of the suffix model is chosen. */
   public enum SuffixWeightRule {
@@ -119,53 +123,68 @@ public record TrainingOptions(
 
   public TrainingOptions withOrder(int newOrder) {
     return new TrainingOptions(newOrder, maxSuffixLength, rareWordMaxCount, suffixWeightRule, suffixWeight,
-        openClassMinShare, shapeClasses, capitalisationStates, contextEmissions, lowercaseFirstWord, contextMinCount, latentRounds, unknownWordPrior);
+        openClassMinShare, shapeClasses, capitalisationStates, contextEmissions, lowercaseFirstWord, contextMinCount, latentRounds, unknownWordPrior,
+        lowerCaseForms);
   }
 
   /** A fixed θ. */
   public TrainingOptions withSuffixWeight(double weight) {
     return new TrainingOptions(order, maxSuffixLength, rareWordMaxCount, SuffixWeightRule.FIXED, weight,
-        openClassMinShare, shapeClasses, capitalisationStates, contextEmissions, lowercaseFirstWord, contextMinCount, latentRounds, unknownWordPrior);
+        openClassMinShare, shapeClasses, capitalisationStates, contextEmissions, lowercaseFirstWord, contextMinCount, latentRounds, unknownWordPrior,
+        lowerCaseForms);
   }
 
   /** θ chosen by a rule rather than given. */
   public TrainingOptions withSuffixWeightRule(SuffixWeightRule rule) {
     return new TrainingOptions(order, maxSuffixLength, rareWordMaxCount, rule, Double.NaN,
-        openClassMinShare, shapeClasses, capitalisationStates, contextEmissions, lowercaseFirstWord, contextMinCount, latentRounds, unknownWordPrior);
+        openClassMinShare, shapeClasses, capitalisationStates, contextEmissions, lowercaseFirstWord, contextMinCount, latentRounds, unknownWordPrior,
+        lowerCaseForms);
   }
 
   public TrainingOptions withShapeClasses(boolean shapes) {
     return new TrainingOptions(order, maxSuffixLength, rareWordMaxCount, suffixWeightRule, suffixWeight,
-        openClassMinShare, shapes, capitalisationStates, contextEmissions, lowercaseFirstWord, contextMinCount, latentRounds, unknownWordPrior);
+        openClassMinShare, shapes, capitalisationStates, contextEmissions, lowercaseFirstWord, contextMinCount, latentRounds, unknownWordPrior,
+        lowerCaseForms);
   }
 
   public TrainingOptions withSuffix(int maxLength, int rareMaxCount) {
     return new TrainingOptions(order, maxLength, rareMaxCount, suffixWeightRule, suffixWeight,
-        openClassMinShare, shapeClasses, capitalisationStates, contextEmissions, lowercaseFirstWord, contextMinCount, latentRounds, unknownWordPrior);
+        openClassMinShare, shapeClasses, capitalisationStates, contextEmissions, lowercaseFirstWord, contextMinCount, latentRounds, unknownWordPrior,
+        lowerCaseForms);
   }
 
   public TrainingOptions withOpenClassMinShare(double share) {
     return new TrainingOptions(order, maxSuffixLength, rareWordMaxCount, suffixWeightRule, suffixWeight,
-        share, shapeClasses, capitalisationStates, contextEmissions, lowercaseFirstWord, contextMinCount, latentRounds, unknownWordPrior);
+        share, shapeClasses, capitalisationStates, contextEmissions, lowercaseFirstWord, contextMinCount, latentRounds, unknownWordPrior,
+        lowerCaseForms);
   }
 
   /** The three cues beyond the classic model, each on or off. */
   public TrainingOptions withCues(boolean capitalisation, boolean context, boolean lowercaseFirst) {
     return new TrainingOptions(order, maxSuffixLength, rareWordMaxCount, suffixWeightRule, suffixWeight,
-        openClassMinShare, shapeClasses, capitalisation, context, lowercaseFirst, contextMinCount, latentRounds, unknownWordPrior);
+        openClassMinShare, shapeClasses, capitalisation, context, lowercaseFirst, contextMinCount, latentRounds, unknownWordPrior,
+        lowerCaseForms);
   }
 
   /** Rounds of latent sub-state splitting (0 for none). */
   public TrainingOptions withLatentRounds(int rounds) {
     return new TrainingOptions(order, maxSuffixLength, rareWordMaxCount, suffixWeightRule, suffixWeight,
-        openClassMinShare, shapeClasses, capitalisationStates, contextEmissions, lowercaseFirstWord, contextMinCount, rounds, unknownWordPrior);
+        openClassMinShare, shapeClasses, capitalisationStates, contextEmissions, lowercaseFirstWord, contextMinCount, rounds, unknownWordPrior,
+        lowerCaseForms);
   }
 
   /** What the ending-based tag probability of an unknown word is divided by. */
   public TrainingOptions withUnknownWordPrior(UnknownWordPrior prior) {
     return new TrainingOptions(order, maxSuffixLength, rareWordMaxCount, suffixWeightRule, suffixWeight,
         openClassMinShare, shapeClasses, capitalisationStates, contextEmissions, lowercaseFirstWord, contextMinCount,
-        latentRounds, prior);
+        latentRounds, prior, lowerCaseForms);
+  }
+
+  /** Whether unknown capitalised words are weighed by the tag of their lower-case form. */
+  public TrainingOptions withLowerCaseForms(boolean use) {
+    return new TrainingOptions(order, maxSuffixLength, rareWordMaxCount, suffixWeightRule, suffixWeight,
+        openClassMinShare, shapeClasses, capitalisationStates, contextEmissions, lowercaseFirstWord, contextMinCount,
+        latentRounds, unknownWordPrior, use);
   }
 
   /** The options as provenance entries. */
@@ -183,6 +202,7 @@ public record TrainingOptions(
     m.put("option.lowercaseFirstWord", Boolean.toString(lowercaseFirstWord));
     m.put("option.contextMinCount", Integer.toString(contextMinCount));
     m.put("option.latentRounds", Integer.toString(latentRounds));
+    m.put("option.lowerCaseForms", Boolean.toString(lowerCaseForms));
     m.put("option.unknownWordPrior", unknownWordPrior.name().toLowerCase(Locale.ROOT).replace('_', '-'));
     return m;
   }
