@@ -47,8 +47,8 @@ public final class ModelFile {
 
   public static final int VERSION_START = 1;
   /**
-   * Version 2 adds the unknown-word priors of capitalised words and the cue of the lower-case
-   * forms of capitalised words.
+   * Version 2 adds to the unknown-word model the priors of capitalised words, the cue of the
+   * lower-case forms of capitalised words and the tries of word beginnings.
    */
   public static final int VERSION_CAPITALISED_PRIORS = 2;
   public static final int VERSION_CURRENT = VERSION_CAPITALISED_PRIORS;
@@ -159,6 +159,12 @@ public final class ModelFile {
     if (cue != null) {
       writeDoubles(out, cue.logStatePrior());
       writeDoubles(out, cue.factors());
+    }
+    out.writeVInt(model.maxPrefixLength());
+    if (model.maxPrefixLength() > 0) {
+      for (SuffixTrie trie : model.prefixTries()) {
+        writeTrie(out, trie);
+      }
     }
   }
 
@@ -405,7 +411,13 @@ public final class ModelFile {
       double[] factors = readDoubles(in, limits.count((long) tagCount * openCount, 8, "lower-case form factors"));
       cue = new LowerCaseFormCue(logStatePrior, factors, tagCount, openCount, lexicon, states);
     }
-    return new UnknownWordModel(theta, maxSuffix, open, logPrior, logPriorCapitalised, base, trieOfShape, tries, cue);
+    int maxPrefix = version >= VERSION_CAPITALISED_PRIORS ? in.readVInt() : 0;
+    SuffixTrie[] prefixTries = null;
+    if (maxPrefix > 0) {
+      prefixTries = new SuffixTrie[] {readTrie(in, limits, tagCount), readTrie(in, limits, tagCount)};
+    }
+    return new UnknownWordModel(theta, maxSuffix, open, logPrior, logPriorCapitalised, base, trieOfShape, tries, cue,
+        maxPrefix, prefixTries);
   }
 
   private static SuffixTrie readTrie(DataInput in, Limits limits, int tagCount) throws IOException {

@@ -35,6 +35,9 @@ public final class UnknownWordModel {
   private final double[] baseDistribution;
   private final int[] trieOfShape;
   private final LowerCaseFormCue lowerCaseForms;
+  private final int maxPrefixLength;
+  private final SuffixTrie[] prefixTries;
+  private final int[][] openOfPrefixCount;
   private final SuffixTrie[] tries;
   /**
    * Per trie, per count entry: the index of its tag among the open tags, or -1 for a closed
@@ -101,6 +104,31 @@ public final class UnknownWordModel {
       int[] trieOfShape,
       SuffixTrie[] tries,
       LowerCaseFormCue lowerCaseForms) {
+    this(theta, maxSuffixLength, openTags, logPrior, logPriorCapitalised, baseDistribution, trieOfShape, tries,
+        lowerCaseForms, 0, null);
+  }
+
+  /**
+   * A model that also weighs an unknown word by its beginning, where {@code maxPrefixLength} is
+   * positive: {@code prefixTries} holds two tries of word beginnings (see {@link
+   * #prefixTries()}); the other parameters as above.
+   */
+  public UnknownWordModel(
+      double theta,
+      int maxSuffixLength,
+      int[] openTags,
+      double[] logPrior,
+      double[] logPriorCapitalised,
+      double[] baseDistribution,
+      int[] trieOfShape,
+      SuffixTrie[] tries,
+      LowerCaseFormCue lowerCaseForms,
+      int maxPrefixLength,
+      SuffixTrie[] prefixTries) {
+    if (maxPrefixLength < 0 || (maxPrefixLength > 0 && (prefixTries == null || prefixTries.length != 2))) {
+      throw new IllegalArgumentException("a model of word beginnings needs two tries and a positive length: "
+          + maxPrefixLength);
+    }
     if (logPriorCapitalised.length != logPrior.length) {
       throw new IllegalArgumentException("one prior per tag expected for capitalised words as for the others");
     }
@@ -135,6 +163,15 @@ public final class UnknownWordModel {
     this.baseDistribution = baseDistribution.clone();
     this.trieOfShape = trieOfShape.clone();
     this.lowerCaseForms = lowerCaseForms;
+    this.maxPrefixLength = maxPrefixLength;
+    this.prefixTries = maxPrefixLength > 0 ? prefixTries.clone() : null;
+    this.openOfPrefixCount = maxPrefixLength > 0 ? new int[2][] : null;
+    for (int t = 0; maxPrefixLength > 0 && t < 2; t++) {
+      openOfPrefixCount[t] = new int[prefixTries[t].countTag.length];
+      for (int i = 0; i < openOfPrefixCount[t].length; i++) {
+        openOfPrefixCount[t][i] = Math.max(-1, Arrays.binarySearch(this.openTags, prefixTries[t].countTag[i]));
+      }
+    }
     this.tries = tries.clone();
     this.openOfCount = new int[tries.length][];
     for (int t = 0; t < tries.length; t++) {
@@ -182,6 +219,11 @@ public final class UnknownWordModel {
     if (lowerCaseForms != null) {
       lowerCaseForms.apply(buf, off, len, out);
     }
+    if (prefixTries != null) {
+      for (int k = 0; k < openTags.length; k++) {
+        out[k] *= prefixFactor(buf, off, len, k);
+      }
+    }
     double[] prior = capitalisedState ? logPriorCapitalised : logPrior;
     for (int i = 0; i < openTags.length; i++) {
       out[i] = Math.log(out[i]) - prior[openTags[i]];
@@ -220,6 +262,49 @@ public final class UnknownWordModel {
       abstractTo(trie, openOf, node, weight, heldOut, out, scratch);
     }
     return depth;
+  }
+
+  /**
+   * {@code P(openTag(k) | beginning) / P(openTag(k))} among the rare words of the word's
+   * capitalisation: successive abstraction over the lower-cased first characters, from the
+   * distribution over all rare words through the trie's root (all rare words of that
+   * capitalisation, the divisor) to the longest beginning that was counted. One open tag at a
+   * time, so that it needs no buffer: the path is short and its nodes hold few counts.
+   */
+  double prefixFactor(char[] buf, int off, int len, int k) {
+    int group = WordShape.classify(buf, off, len).capitalisationOnly() == WordShape.CAPITALISED ? 1 : 0;
+    SuffixTrie trie = prefixTries[group];
+    int[] openOf = openOfPrefixCount[group];
+    double dist = baseDistribution[k];
+    double root = Double.NaN;
+    int node = 0;
+    for (int depth = 0; ; depth++) {
+      double counted = 0;
+      double own = 0;
+      for (int i = trie.countStart[node], end = trie.countStart[node + 1]; i < end; i++) {
+        if (openOf[i] >= 0) {
+          counted += trie.countValue[i];
+          if (openOf[i] == k) {
+            own = trie.countValue[i];
+          }
+        }
+      }
+      if (counted == 0) {
+        break;
+      }
+      if (depth == 0) {
+        root = (own + 1.0) / (counted + 1.0 * openTags.length);
+      }
+      dist = (own / counted + theta * dist) / (1 + theta);
+      if (depth == Math.min(len, maxPrefixLength)) {
+        break;
+      }
+      node = trie.child(node, Character.toLowerCase(buf[off + depth]));
+      if (node < 0) {
+        break;
+      }
+    }
+    return Double.isNaN(root) ? 1 : dist / root;
   }
 
   /** dist := (P^(t | node) + θ dist) / (1 + θ), over open tags. */
@@ -301,6 +386,21 @@ public final class UnknownWordModel {
     return tries;
   }
 
+  /** Longest word beginning consulted; 0 if the model does not look at beginnings. */
+  public int maxPrefixLength() {
+    return maxPrefixLength;
+  }
+
+  /**
+   * Counts of word beginnings, or null if the model has none: for words not written with a
+   * capital ([0]) and those that are ([1], {@link WordShape#CAPITALISED} and {@link
+   * WordShape#ALL_CAPS}), tries of the rare training words lower-cased and reversed, so that a
+   * trie's path from the root spells a beginning.
+   */
+  public SuffixTrie[] prefixTries() {
+    return prefixTries == null ? null : prefixTries.clone();
+  }
+
   /** The cue of the lower-case forms of capitalised words, or null if the model has none. */
   public LowerCaseFormCue lowerCaseForms() {
     return lowerCaseForms;
@@ -319,6 +419,11 @@ public final class UnknownWordModel {
     }
     if (lowerCaseForms != null) {
       bytes += lowerCaseForms.ramBytesUsed();
+    }
+    if (prefixTries != null) {
+      for (SuffixTrie t : prefixTries) {
+        bytes += 14L * t.nodeCount() + 10L * t.countTag.length;
+      }
     }
     return bytes;
   }

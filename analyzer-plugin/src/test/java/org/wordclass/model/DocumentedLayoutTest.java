@@ -98,6 +98,12 @@ class DocumentedLayoutTest {
       assertArrayEquals(cue.logStatePrior(), doubles(model.states().size()));
       assertArrayEquals(cue.factors(), doubles(model.tags().size() * u.openTagCount()));
     }
+    assertEquals(u.maxPrefixLength(), vint());
+    if (u.maxPrefixLength() > 0) {
+      for (SuffixTrie trie : u.prefixTries()) {
+        trie(trie);
+      }
+    }
   }
 
   /** Breadth-first nodes: counts, then child characters; edge e leads to node e + 1. */

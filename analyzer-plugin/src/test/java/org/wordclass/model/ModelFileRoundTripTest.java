@@ -20,7 +20,7 @@ import org.wordclass.testing.TestModels;
 class ModelFileRoundTripTest {
   /** Words whose unknown-word scores are compared, one or more per shape and ending in the tries. */
   private static final List<String> PROBES = List.of("walked", "talked", "stable", "Bern", "BERN", "x", "", "42", "...", "ending",
-      "Walks", "RUN", "The");
+      "Walks", "RUN", "The", "wall", "tab", "Berlin");
 
   @TempDir Path dir;
 
@@ -62,10 +62,11 @@ class ModelFileRoundTripTest {
   }
 
   /**
-   * A version-1 file (one prior row in the unknown-word model, no lower-case forms) is still
+   * A version-1 file (one prior row in the unknown-word model, no lower-case forms, no beginnings) is still
    * read, its prior serving words with and without a capital alike. Made from a version-2 file
-   * of a model whose two rows are equal and which has no lower-case forms, by dropping the second
-   * row and the flag byte and writing header and footer of version 1.
+   * of a model whose two rows are equal and which has neither lower-case forms nor beginnings, by
+   * dropping the second row and the two bytes that say so and writing header and footer of
+   * version 1.
    */
   @Test
   void versionOneFileIsReadWithOnePriorForEveryWord() throws IOException {
@@ -81,11 +82,13 @@ class ModelFileRoundTripTest {
     int first = indexOf(current, row);
     int second = first + row.length;
     assertArrayEquals(row, java.util.Arrays.copyOfRange(current, second, second + row.length), "two equal rows");
-    // version 1 has neither the second row nor the flag byte of lower-case forms, the body's last byte
-    assertEquals(0, current[current.length - 17], "no lower-case forms");
-    byte[] body = new byte[current.length - 21 - 16 - row.length - 1];
+    // version 1 has neither the second row nor the two last bytes of the body: the flag of
+    // lower-case forms and the length of beginnings
+    assertEquals(0, current[current.length - 18], "no lower-case forms");
+    assertEquals(0, current[current.length - 17], "no beginnings");
+    byte[] body = new byte[current.length - 21 - 16 - row.length - 2];
     System.arraycopy(current, 21, body, 0, second - 21);
-    System.arraycopy(current, second + row.length, body, second - 21, current.length - 17 - second - row.length);
+    System.arraycopy(current, second + row.length, body, second - 21, current.length - 18 - second - row.length);
     byte[] versionOne = TestModels.withHeaderAndFooter(ModelFile.VERSION_START, out -> out.writeBytes(body, body.length));
     HmmModel read = ModelFile.read(versionOne, "v1");
     assertSameModel(model, read);
@@ -155,6 +158,10 @@ class ModelFileRoundTripTest {
     assertArrayEquals(expected.openTags(), actual.openTags());
     assertArrayEquals(expected.logPrior(), actual.logPrior());
     assertArrayEquals(expected.logPriorCapitalised(), actual.logPriorCapitalised());
+    assertEquals(expected.maxPrefixLength(), actual.maxPrefixLength());
+    for (int i = 0; expected.maxPrefixLength() > 0 && i < 2; i++) {
+      assertSameTrie(expected.prefixTries()[i], actual.prefixTries()[i]);
+    }
     assertEquals(expected.lowerCaseForms() == null, actual.lowerCaseForms() == null);
     if (expected.lowerCaseForms() != null) {
       assertArrayEquals(expected.lowerCaseForms().logStatePrior(), actual.lowerCaseForms().logStatePrior());

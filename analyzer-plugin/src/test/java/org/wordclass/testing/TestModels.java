@@ -161,12 +161,19 @@ public final class TestModels {
     upper.add("Bern", 1, 5, 4);
     int[] trieOfShape = {0, 1, 1, 0, 0};
     // words written with a capital are divided by other priors than the rest, as with capitalisation states
-    // and capitalised words known in lower case ("Walks", "RUN") are weighed by that form's tag
+    // beginnings, counted lower-cased and reversed ("walked" as "deklaw")
+    SuffixTrie.Builder lowerBeginnings = new SuffixTrie.Builder();
+    lowerBeginnings.add("deklaw", 2, 3, 3);
+    lowerBeginnings.add("elbat", 1, 4, 3);
+    SuffixTrie.Builder upperBeginnings = new SuffixTrie.Builder();
+    upperBeginnings.add("nreb", 1, 5, 3);
+        // and capitalised words known in lower case ("Walks", "RUN") are weighed by that form's tag
     LowerCaseFormCue cue = new LowerCaseFormCue(new double[] {Math.log(0.5), Math.log(0.3), Math.log(0.2)},
         new double[] {1, 1, 1.5, 0.5, 0.25, 3}, 3, 2, lexicon, StateSpace.oneStatePerTag(3));
     return new UnknownWordModel(0.75, 4, new int[] {1, 2}, new double[] {Math.log(0.4), Math.log(0.35), Math.log(0.25)},
         new double[] {Math.log(0.5), Math.log(0.45), Math.log(0.05)}, new double[] {0.6, 0.4}, trieOfShape,
-        new SuffixTrie[] {lower.build(), upper.build()}, cue);
+        new SuffixTrie[] {lower.build(), upper.build()}, cue, 3, new SuffixTrie[] {lowerBeginnings.build(),
+            upperBeginnings.build()});
   }
 
   /** The bytes {@link ModelFile#write(HmmModel, IndexOutput)} produces for {@code model}. */

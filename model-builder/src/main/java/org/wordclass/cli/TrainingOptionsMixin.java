@@ -28,6 +28,11 @@ final class TrainingOptionsMixin {
       description = "Longest word ending the unknown-word model counts. Default: ${DEFAULT-VALUE}.")
   int maxSuffixLength;
 
+  @Option(names = "--max-prefix-length", paramLabel = "N",
+      description = "Longest word beginning whose classes weigh an unknown word's classes beside its ending; "
+          + "0 to look at endings only. Default: ${DEFAULT-VALUE}.")
+  int maxPrefixLength;
+
   @Option(names = "--rare-word-max-count", paramLabel = "N",
       description = "Words seen at most this often teach the unknown-word model. Default: ${DEFAULT-VALUE}.")
   int rareWordMaxCount;
@@ -96,7 +101,7 @@ final class TrainingOptionsMixin {
       TrainingOptions options = new TrainingOptions(order, maxSuffixLength, rareWordMaxCount,
           TrainingOptions.SuffixWeightRule.HELD_OUT, Double.NaN, openClassMinShare, shapeClasses,
           capitalisationStates, contextEmissions, lowercaseFirstWord, contextMinCount, latentRounds,
-          unknownWordPrior(unknownWordPrior), lowerCaseForms);
+          unknownWordPrior(unknownWordPrior), lowerCaseForms, maxPrefixLength);
       return withSuffixWeight(options, suffixWeight);
     } catch (IllegalArgumentException e) {
       throw new ParameterException(mixee.commandLine(), "Invalid training option: " + e.getMessage());

@@ -190,6 +190,7 @@ public final class HmmEstimator {
     for (int i = 0; i < trieCount; i++) {
       builders[i] = new SuffixTrie.Builder();
     }
+    SuffixTrie.Builder[] prefixBuilders = {new SuffixTrie.Builder(), new SuffixTrie.Builder()};
     long[] rareByTag = new long[tagCount];
     TreeMap<String, Map<Integer, Integer>> byWord = new TreeMap<>(wordTags);
     for (Map.Entry<String, Map<Integer, Integer>> word : byWord.entrySet()) {
@@ -199,10 +200,16 @@ public final class HmmEstimator {
       }
       String w = word.getKey();
       char[] chars = w.toCharArray();
-      SuffixTrie.Builder trie = builders[trieOfShape[WordShape.classify(chars, 0, chars.length).ordinal()]];
+      WordShape shape = WordShape.classify(chars, 0, chars.length);
+      SuffixTrie.Builder trie = builders[trieOfShape[shape.ordinal()]];
+      boolean capitalised = shape.capitalisationOnly() == WordShape.CAPITALISED;
+      String beginnings = options.maxPrefixLength() > 0 ? lowerCasedReversed(chars) : null;
       for (Map.Entry<Integer, Integer> e : new TreeMap<>(word.getValue()).entrySet()) {
         int tag = finalId[e.getKey() + 1];
         trie.add(w, tag, e.getValue(), options.maxSuffixLength());
+        if (options.maxPrefixLength() > 0) {
+          prefixBuilders[capitalised ? 1 : 0].add(beginnings, tag, e.getValue(), options.maxPrefixLength());
+        }
         rareByTag[tag] += e.getValue();
       }
     }
@@ -229,8 +236,22 @@ public final class HmmEstimator {
     };
     LowerCaseFormCue cue = options.lowerCaseForms()
         ? lowerCaseFormCue(counts, wordTags, finalId, openTags, tagCount, lexicon, plan) : null;
+    SuffixTrie[] prefixTries = options.maxPrefixLength() > 0
+        ? new SuffixTrie[] {prefixBuilders[0].build(), prefixBuilders[1].build()} : null;
     return new UnknownWordModel(theta, options.maxSuffixLength(), openTags, logPrior, logPriorCapitalised, base,
-        trieOfShape, tries, cue);
+        trieOfShape, tries, cue, options.maxPrefixLength(), prefixTries);
+  }
+
+  /**
+   * The word lower-cased character by character and reversed: counted as endings, its endings
+   * are the word's beginnings, as {@link UnknownWordModel} reads them.
+   */
+  static String lowerCasedReversed(char[] chars) {
+    char[] out = new char[chars.length];
+    for (int i = 0; i < chars.length; i++) {
+      out[chars.length - 1 - i] = Character.toLowerCase(chars[i]);
+    }
+    return new String(out);
   }
 
   /**

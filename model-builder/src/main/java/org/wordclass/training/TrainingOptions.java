@@ -36,6 +36,8 @@ import java.util.Map;
  * @param lowerCaseForms weigh the tags of an unknown capitalised word by what its lower-case
  *     form, where known, mostly is ("Customer" by "customer", a noun); see {@code
  *     org.wordclass.model.LowerCaseFormCue}
+ * @param maxPrefixLength longest word beginning whose tag distribution (over rare words) weighs
+ *     an unknown word's tags beside its ending; 0 to look at endings only
  */
 public record TrainingOptions(
     int order,
@@ -51,15 +53,17 @@ public record TrainingOptions(
     int contextMinCount,
     int latentRounds,
     UnknownWordPrior unknownWordPrior,
-    boolean lowerCaseForms) {
+    boolean lowerCaseForms,
+    int maxPrefixLength) {
 
   public static final TrainingOptions DEFAULTS =
       new TrainingOptions(2, 10, 10, SuffixWeightRule.HELD_OUT, Double.NaN, 0.002, false, true, true, true, 3, 0,
-          UnknownWordPrior.LOWER_CASE_STATE, true);
+          UnknownWordPrior.LOWER_CASE_STATE, true, 4);
 
   /** The classic second-order model with a suffix model and none of the later cues. */
   public static final TrainingOptions CLASSIC =
-      DEFAULTS.withCues(false, false, false).withUnknownWordPrior(UnknownWordPrior.TAG).withLowerCaseForms(false);
+      DEFAULTS.withCues(false, false, false).withUnknownWordPrior(UnknownWordPrior.TAG).withLowerCaseForms(false)
+          .withMaxPrefixLength(0);
 
   /** How θ of the suffix model is chosen. */
   public enum SuffixWeightRule {
@@ -113,6 +117,9 @@ public record TrainingOptions(
     if (latentRounds < 0 || latentRounds > LatentStates.MAX_ROUNDS) {
       throw new IllegalArgumentException("latent rounds must be in 0.." + LatentStates.MAX_ROUNDS + ": " + latentRounds);
     }
+    if (maxPrefixLength < 0) {
+      throw new IllegalArgumentException("maximum prefix length must not be negative: " + maxPrefixLength);
+    }
     if (contextMinCount < 1) {
       throw new IllegalArgumentException("context count must be at least 1: " + contextMinCount);
     }
@@ -124,67 +131,74 @@ public record TrainingOptions(
   public TrainingOptions withOrder(int newOrder) {
     return new TrainingOptions(newOrder, maxSuffixLength, rareWordMaxCount, suffixWeightRule, suffixWeight,
         openClassMinShare, shapeClasses, capitalisationStates, contextEmissions, lowercaseFirstWord, contextMinCount, latentRounds, unknownWordPrior,
-        lowerCaseForms);
+        lowerCaseForms, maxPrefixLength);
   }
 
   /** A fixed θ. */
   public TrainingOptions withSuffixWeight(double weight) {
     return new TrainingOptions(order, maxSuffixLength, rareWordMaxCount, SuffixWeightRule.FIXED, weight,
         openClassMinShare, shapeClasses, capitalisationStates, contextEmissions, lowercaseFirstWord, contextMinCount, latentRounds, unknownWordPrior,
-        lowerCaseForms);
+        lowerCaseForms, maxPrefixLength);
   }
 
   /** θ chosen by a rule rather than given. */
   public TrainingOptions withSuffixWeightRule(SuffixWeightRule rule) {
     return new TrainingOptions(order, maxSuffixLength, rareWordMaxCount, rule, Double.NaN,
         openClassMinShare, shapeClasses, capitalisationStates, contextEmissions, lowercaseFirstWord, contextMinCount, latentRounds, unknownWordPrior,
-        lowerCaseForms);
+        lowerCaseForms, maxPrefixLength);
   }
 
   public TrainingOptions withShapeClasses(boolean shapes) {
     return new TrainingOptions(order, maxSuffixLength, rareWordMaxCount, suffixWeightRule, suffixWeight,
         openClassMinShare, shapes, capitalisationStates, contextEmissions, lowercaseFirstWord, contextMinCount, latentRounds, unknownWordPrior,
-        lowerCaseForms);
+        lowerCaseForms, maxPrefixLength);
   }
 
   public TrainingOptions withSuffix(int maxLength, int rareMaxCount) {
     return new TrainingOptions(order, maxLength, rareMaxCount, suffixWeightRule, suffixWeight,
         openClassMinShare, shapeClasses, capitalisationStates, contextEmissions, lowercaseFirstWord, contextMinCount, latentRounds, unknownWordPrior,
-        lowerCaseForms);
+        lowerCaseForms, maxPrefixLength);
   }
 
   public TrainingOptions withOpenClassMinShare(double share) {
     return new TrainingOptions(order, maxSuffixLength, rareWordMaxCount, suffixWeightRule, suffixWeight,
         share, shapeClasses, capitalisationStates, contextEmissions, lowercaseFirstWord, contextMinCount, latentRounds, unknownWordPrior,
-        lowerCaseForms);
+        lowerCaseForms, maxPrefixLength);
   }
 
   /** The three cues beyond the classic model, each on or off. */
   public TrainingOptions withCues(boolean capitalisation, boolean context, boolean lowercaseFirst) {
     return new TrainingOptions(order, maxSuffixLength, rareWordMaxCount, suffixWeightRule, suffixWeight,
         openClassMinShare, shapeClasses, capitalisation, context, lowercaseFirst, contextMinCount, latentRounds, unknownWordPrior,
-        lowerCaseForms);
+        lowerCaseForms, maxPrefixLength);
   }
 
   /** Rounds of latent sub-state splitting (0 for none). */
   public TrainingOptions withLatentRounds(int rounds) {
     return new TrainingOptions(order, maxSuffixLength, rareWordMaxCount, suffixWeightRule, suffixWeight,
         openClassMinShare, shapeClasses, capitalisationStates, contextEmissions, lowercaseFirstWord, contextMinCount, rounds, unknownWordPrior,
-        lowerCaseForms);
+        lowerCaseForms, maxPrefixLength);
   }
 
   /** What the ending-based tag probability of an unknown word is divided by. */
   public TrainingOptions withUnknownWordPrior(UnknownWordPrior prior) {
     return new TrainingOptions(order, maxSuffixLength, rareWordMaxCount, suffixWeightRule, suffixWeight,
         openClassMinShare, shapeClasses, capitalisationStates, contextEmissions, lowercaseFirstWord, contextMinCount,
-        latentRounds, prior, lowerCaseForms);
+        latentRounds, prior, lowerCaseForms, maxPrefixLength);
   }
 
   /** Whether unknown capitalised words are weighed by the tag of their lower-case form. */
   public TrainingOptions withLowerCaseForms(boolean use) {
     return new TrainingOptions(order, maxSuffixLength, rareWordMaxCount, suffixWeightRule, suffixWeight,
         openClassMinShare, shapeClasses, capitalisationStates, contextEmissions, lowercaseFirstWord, contextMinCount,
-        latentRounds, unknownWordPrior, use);
+        latentRounds, unknownWordPrior, use, maxPrefixLength);
+  }
+
+  /** Longest word beginning the unknown-word model counts; 0 for none. */
+  public TrainingOptions withMaxPrefixLength(int length) {
+    return new TrainingOptions(order, maxSuffixLength, rareWordMaxCount, suffixWeightRule, suffixWeight,
+        openClassMinShare, shapeClasses, capitalisationStates, contextEmissions, lowercaseFirstWord, contextMinCount,
+        latentRounds, unknownWordPrior, lowerCaseForms, length);
   }
 
   /** The options as provenance entries. */
@@ -192,6 +206,7 @@ public record TrainingOptions(
     Map<String, String> m = new LinkedHashMap<>();
     m.put("option.order", Integer.toString(order));
     m.put("option.maxSuffixLength", Integer.toString(maxSuffixLength));
+    m.put("option.maxPrefixLength", Integer.toString(maxPrefixLength));
     m.put("option.rareWordMaxCount", Integer.toString(rareWordMaxCount));
     m.put("option.suffixWeight", suffixWeightRule == SuffixWeightRule.FIXED
         ? Double.toString(suffixWeight) : suffixWeightRule.name().toLowerCase(Locale.ROOT).replace('_', '-'));

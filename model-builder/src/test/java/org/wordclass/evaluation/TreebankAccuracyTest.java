@@ -65,21 +65,26 @@ class TreebankAccuracyTest {
    * words, each measured there before it became a default: dividing a lower-case unknown word's
    * ending-based tag probability by the prior of its state rather than of its tag (unknown-word
    * accuracy 0.7658 to 0.7723), and weighing a capitalised unknown word by what its lower-case
-   * form mostly is (0.7723 to 0.7827).
+   * form mostly is (0.7723 to 0.7827), and weighing it by the tags of words with its first
+   * (up to 4) letters (0.7827 to 0.7931).
    */
   @Test
   void englishDevUnknownWordCuesEachHelp() {
     Path train = Corpora.ewtTrain();
     Path dev = Corpora.ewtDev();
     EvaluationReport both = score(train(train, TagColumn.UPOS, TrainingOptions.DEFAULTS), dev, TagColumn.UPOS);
-    assertTrue(both.accuracy() >= 0.936, "EWT dev UPOS accuracy " + both.accuracy());
-    assertTrue(both.unknownAccuracy() >= 0.78, "EWT dev unknown-word accuracy " + both.unknownAccuracy());
-    TrainingOptions withoutForms = TrainingOptions.DEFAULTS.withLowerCaseForms(false);
+    assertTrue(both.accuracy() >= 0.937, "EWT dev UPOS accuracy " + both.accuracy());
+    assertTrue(both.unknownAccuracy() >= 0.79, "EWT dev unknown-word accuracy " + both.unknownAccuracy());
+    EvaluationReport endingsOnly = score(train(train, TagColumn.UPOS, TrainingOptions.DEFAULTS.withMaxPrefixLength(0)), dev,
+        TagColumn.UPOS);
+    assertTrue(both.unknownAccuracy() > endingsOnly.unknownAccuracy(),
+        "word beginnings " + both.unknownAccuracy() + " against endings only " + endingsOnly.unknownAccuracy());
+    TrainingOptions withoutForms = TrainingOptions.DEFAULTS.withLowerCaseForms(false).withMaxPrefixLength(0);
     EvaluationReport statePrior = score(train(train, TagColumn.UPOS, withoutForms), dev, TagColumn.UPOS);
     EvaluationReport tagPrior = score(train(train, TagColumn.UPOS,
         withoutForms.withUnknownWordPrior(TrainingOptions.UnknownWordPrior.TAG)), dev, TagColumn.UPOS);
-    assertTrue(both.unknownAccuracy() > statePrior.unknownAccuracy(),
-        "lower-case forms " + both.unknownAccuracy() + " against none " + statePrior.unknownAccuracy());
+    assertTrue(endingsOnly.unknownAccuracy() > statePrior.unknownAccuracy(),
+        "lower-case forms " + endingsOnly.unknownAccuracy() + " against none " + statePrior.unknownAccuracy());
     assertTrue(statePrior.unknownAccuracy() > tagPrior.unknownAccuracy(),
         "state prior " + statePrior.unknownAccuracy() + " against tag prior " + tagPrior.unknownAccuracy());
   }
