@@ -13,18 +13,23 @@ import java.util.Arrays;
  *       {@code P(t|l_{n-i+1..n}) = (P^(t|l_{n-i+1..n}) + θ P(t|l_{n-i+2..n})) / (1 + θ)};
  *   <li>each spelling shape (see {@link WordShape}) keeps its own counts, abstracted in turn to
  *       the distribution over all rare words;
- *   <li>the result is inverted with Bayes' rule, {@code P(w|s) ∝ P(s|ending) / P(s)}; the
- *       factor {@code P(ending)} is the same for every tag of a token and cancels in decoding.
- *       The divisor {@code P(s)} is kept twice, for the states of words written with a capital
- *       and for the others: where a model splits tags by capitalisation, the state a word can
- *       take is the tag together with its spelling, and dividing by the tag's prior alone would
- *       count the capital twice (once in the ending statistics, once in the transitions into
- *       the capitalised state). Models without that split keep {@code P(t)} in both.
+ *   <li>where the model has them, two further cues multiply that distribution: what the word's
+ *       lower-case form mostly is, for a word written with a capital ({@link LowerCaseFormCue}),
+ *       and the tags of rare words with the same first letters, {@code P(t | beginning) / P(t)}
+ *       ({@link #prefixFactor}), as if beginning and ending were independent given the tag;
+ *   <li>the result is inverted with Bayes' rule, {@code P(w|s) ∝ P(s|w) / P(s)}; the factor
+ *       {@code P(w)} is the same for every tag of a token and cancels in decoding. The divisor
+ *       is kept twice, for words written with a capital and for the others: where a model
+ *       splits tags by capitalisation, the state a word can take is the tag together with its
+ *       spelling, and dividing by the tag's prior alone would count the spelling twice (once
+ *       in the ending statistics, once in the transitions into the state). Models without that
+ *       split keep {@code P(t)} in both.
  * </ul>
  *
  * <p>Only open-class tags, those seen with rare words in training, are candidates. Scoring one
- * word costs one trie step and one pass over the open tags per character of its ending and
- * allocates nothing. Immutable and safe to share between threads.
+ * word costs one trie step and one pass over the open tags per character of its ending (and,
+ * with beginnings, a few steps per open tag and letter of its beginning) and allocates nothing.
+ * Immutable and safe to share between threads.
  */
 public final class UnknownWordModel {
   private final double theta;

@@ -28,7 +28,9 @@ import org.wordclass.model.WordShape;
  *       conditioned on the previous state (Thede and Harper 1999), smoothed back to {@code P(w|s)};
  *   <li>states: one per tag, or, where enabled, tags split by whether the word was written with
  *       a capital in mid-sentence (Brants 2000);
- *   <li>unknown words: see {@link UnknownWordModel};
+ *   <li>unknown words: see {@link UnknownWordModel}; the priors their tag probabilities are
+ *       divided by, the factors of lower-case forms and the counts of word beginnings are
+ *       estimated here as the options say;
  *   <li>where enabled, latent sub-states of every state, fitted by split-merge training (see
  *       {@link LatentStates}).
  * </ul>
