@@ -382,8 +382,8 @@ public final class ModelFile {
     return new Lexicon(entries);
   }
 
-  private static UnknownWordModel readUnknownWords(DataInput in, Limits limits, int tagCount, int version, Lexicon lexicon,
-      StateSpace states)
+  private static UnknownWordModel readUnknownWords(DataInput in, Limits limits, int tagCount, int version,
+      Lexicon lexicon, StateSpace states)
       throws IOException {
     double theta = Double.longBitsToDouble(in.readLong());
     int maxSuffix = in.readVInt();

@@ -116,7 +116,8 @@ final class TrainingOptionsMixin {
       }
     }
     throw new ParameterException(mixee.commandLine(),
-        "Invalid value for --unknown-word-prior: '" + value + "' is not one of tag, state, lower-case-state, rare-tag, rare-state");
+        "Invalid value for --unknown-word-prior: '" + value
+            + "' is not one of tag, state, lower-case-state, rare-tag, rare-state");
   }
 
   /** Reads a rule name or a number. */

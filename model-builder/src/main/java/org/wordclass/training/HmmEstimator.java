@@ -236,7 +236,9 @@ public final class HmmEstimator {
       case TAG_SPREAD -> tagProbabilitySpread(tagTokens, total);
       case FIXED -> options.suffixWeight();
     };
-    LowerCaseFormCue cue = options.lowerCaseForms()
+    // the cue picks a lower-case form's tag by the priors of the supervised states, which latent
+    // sub-states replace: a model with latent states goes without it
+    LowerCaseFormCue cue = options.lowerCaseForms() && options.latentRounds() == 0
         ? lowerCaseFormCue(counts, wordTags, finalId, openTags, tagCount, lexicon, plan) : null;
     SuffixTrie[] prefixTries = options.maxPrefixLength() > 0
         ? new SuffixTrie[] {prefixBuilders[0].build(), prefixBuilders[1].build()} : null;
@@ -320,7 +322,8 @@ public final class HmmEstimator {
     boolean rareOnly = rule == TrainingOptions.UnknownWordPrior.RARE_TAG
         || rule == TrainingOptions.UnknownWordPrior.RARE_STATE;
     boolean byState = options.capitalisationStates() && (rule == TrainingOptions.UnknownWordPrior.STATE
-        || rule == TrainingOptions.UnknownWordPrior.RARE_STATE || rule == TrainingOptions.UnknownWordPrior.LOWER_CASE_STATE);
+        || rule == TrainingOptions.UnknownWordPrior.RARE_STATE
+        || rule == TrainingOptions.UnknownWordPrior.LOWER_CASE_STATE);
     boolean capitalisedByTag = rule == TrainingOptions.UnknownWordPrior.LOWER_CASE_STATE;
     long[][] tokens = new long[2][tagCount];
     for (Map<Integer, Integer> states : counts.wordStates().values()) {

@@ -35,7 +35,7 @@ import java.util.Map;
  *     over rare words
  * @param lowerCaseForms weigh the tags of an unknown capitalised word by what its lower-case
  *     form, where known, mostly is ("Customer" by "customer", a noun); see {@code
- *     org.wordclass.model.LowerCaseFormCue}
+ *     org.wordclass.model.LowerCaseFormCue}; a model with latent states goes without it
  * @param maxPrefixLength longest word beginning whose tag distribution (over rare words) weighs
  *     an unknown word's tags beside its ending; 0 to look at endings only
  */
@@ -130,54 +130,54 @@ public record TrainingOptions(
 
   public TrainingOptions withOrder(int newOrder) {
     return new TrainingOptions(newOrder, maxSuffixLength, rareWordMaxCount, suffixWeightRule, suffixWeight,
-        openClassMinShare, shapeClasses, capitalisationStates, contextEmissions, lowercaseFirstWord, contextMinCount, latentRounds, unknownWordPrior,
-        lowerCaseForms, maxPrefixLength);
+        openClassMinShare, shapeClasses, capitalisationStates, contextEmissions, lowercaseFirstWord, contextMinCount,
+        latentRounds, unknownWordPrior, lowerCaseForms, maxPrefixLength);
   }
 
   /** A fixed θ. */
   public TrainingOptions withSuffixWeight(double weight) {
     return new TrainingOptions(order, maxSuffixLength, rareWordMaxCount, SuffixWeightRule.FIXED, weight,
-        openClassMinShare, shapeClasses, capitalisationStates, contextEmissions, lowercaseFirstWord, contextMinCount, latentRounds, unknownWordPrior,
-        lowerCaseForms, maxPrefixLength);
+        openClassMinShare, shapeClasses, capitalisationStates, contextEmissions, lowercaseFirstWord, contextMinCount,
+        latentRounds, unknownWordPrior, lowerCaseForms, maxPrefixLength);
   }
 
   /** θ chosen by a rule rather than given. */
   public TrainingOptions withSuffixWeightRule(SuffixWeightRule rule) {
     return new TrainingOptions(order, maxSuffixLength, rareWordMaxCount, rule, Double.NaN,
-        openClassMinShare, shapeClasses, capitalisationStates, contextEmissions, lowercaseFirstWord, contextMinCount, latentRounds, unknownWordPrior,
-        lowerCaseForms, maxPrefixLength);
+        openClassMinShare, shapeClasses, capitalisationStates, contextEmissions, lowercaseFirstWord, contextMinCount,
+        latentRounds, unknownWordPrior, lowerCaseForms, maxPrefixLength);
   }
 
   public TrainingOptions withShapeClasses(boolean shapes) {
     return new TrainingOptions(order, maxSuffixLength, rareWordMaxCount, suffixWeightRule, suffixWeight,
-        openClassMinShare, shapes, capitalisationStates, contextEmissions, lowercaseFirstWord, contextMinCount, latentRounds, unknownWordPrior,
-        lowerCaseForms, maxPrefixLength);
+        openClassMinShare, shapes, capitalisationStates, contextEmissions, lowercaseFirstWord, contextMinCount,
+        latentRounds, unknownWordPrior, lowerCaseForms, maxPrefixLength);
   }
 
   public TrainingOptions withSuffix(int maxLength, int rareMaxCount) {
     return new TrainingOptions(order, maxLength, rareMaxCount, suffixWeightRule, suffixWeight,
-        openClassMinShare, shapeClasses, capitalisationStates, contextEmissions, lowercaseFirstWord, contextMinCount, latentRounds, unknownWordPrior,
-        lowerCaseForms, maxPrefixLength);
+        openClassMinShare, shapeClasses, capitalisationStates, contextEmissions, lowercaseFirstWord, contextMinCount,
+        latentRounds, unknownWordPrior, lowerCaseForms, maxPrefixLength);
   }
 
   public TrainingOptions withOpenClassMinShare(double share) {
     return new TrainingOptions(order, maxSuffixLength, rareWordMaxCount, suffixWeightRule, suffixWeight,
-        share, shapeClasses, capitalisationStates, contextEmissions, lowercaseFirstWord, contextMinCount, latentRounds, unknownWordPrior,
-        lowerCaseForms, maxPrefixLength);
+        share, shapeClasses, capitalisationStates, contextEmissions, lowercaseFirstWord, contextMinCount,
+        latentRounds, unknownWordPrior, lowerCaseForms, maxPrefixLength);
   }
 
   /** The three cues beyond the classic model, each on or off. */
   public TrainingOptions withCues(boolean capitalisation, boolean context, boolean lowercaseFirst) {
     return new TrainingOptions(order, maxSuffixLength, rareWordMaxCount, suffixWeightRule, suffixWeight,
-        openClassMinShare, shapeClasses, capitalisation, context, lowercaseFirst, contextMinCount, latentRounds, unknownWordPrior,
-        lowerCaseForms, maxPrefixLength);
+        openClassMinShare, shapeClasses, capitalisation, context, lowercaseFirst, contextMinCount,
+        latentRounds, unknownWordPrior, lowerCaseForms, maxPrefixLength);
   }
 
   /** Rounds of latent sub-state splitting (0 for none). */
   public TrainingOptions withLatentRounds(int rounds) {
     return new TrainingOptions(order, maxSuffixLength, rareWordMaxCount, suffixWeightRule, suffixWeight,
-        openClassMinShare, shapeClasses, capitalisationStates, contextEmissions, lowercaseFirstWord, contextMinCount, rounds, unknownWordPrior,
-        lowerCaseForms, maxPrefixLength);
+        openClassMinShare, shapeClasses, capitalisationStates, contextEmissions, lowercaseFirstWord, contextMinCount,
+        rounds, unknownWordPrior, lowerCaseForms, maxPrefixLength);
   }
 
   /** What the ending-based tag probability of an unknown word is divided by. */
