@@ -78,7 +78,8 @@ final class TrainingOptionsMixin {
   @Option(names = "--latent-rounds", paramLabel = "N",
       description = "Rounds of split-merge training: each splits every hidden state of a class in two, fits "
           + "the halves to the tagged corpus by EM and merges back the splits that help least; 0 for none. "
-          + "Context-dependent emissions are then left out. Slower decoding and a larger model; best with "
+          + "Context-dependent emissions and the lower-case forms of unknown words are then left out. Slower "
+          + "decoding and a larger model; best with "
           + "--order 1 (see docs/latent-states.md). Default: ${DEFAULT-VALUE}.")
   int latentRounds;
 
