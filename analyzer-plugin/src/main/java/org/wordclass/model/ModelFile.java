@@ -46,7 +46,12 @@ public final class ModelFile {
   public static final String CODEC = "WordClassHmm";
 
   public static final int VERSION_START = 1;
-  public static final int VERSION_CURRENT = VERSION_START;
+  /**
+   * Version 2 adds to the unknown-word model the priors of capitalised words, the cue of the
+   * lower-case forms of capitalised words and the tries of word beginnings.
+   */
+  public static final int VERSION_CAPITALISED_PRIORS = 2;
+  public static final int VERSION_CURRENT = VERSION_CAPITALISED_PRIORS;
 
   /** Largest model file this reader accepts, a guard against reading a wrong file whole. */
   public static final long MAX_FILE_BYTES = 1L << 30;
@@ -140,6 +145,7 @@ public final class ModelFile {
       out.writeVInt(t);
     }
     writeDoubles(out, model.logPrior());
+    writeDoubles(out, model.logPriorCapitalised());
     writeDoubles(out, model.baseDistribution());
     for (int t : model.trieOfShape()) {
       out.writeVInt(t);
@@ -147,6 +153,18 @@ public final class ModelFile {
     out.writeVInt(model.tries().length);
     for (SuffixTrie trie : model.tries()) {
       writeTrie(out, trie);
+    }
+    LowerCaseFormCue cue = model.lowerCaseForms();
+    out.writeByte((byte) (cue == null ? 0 : 1));
+    if (cue != null) {
+      writeDoubles(out, cue.logStatePrior());
+      writeDoubles(out, cue.factors());
+    }
+    out.writeVInt(model.maxPrefixLength());
+    if (model.maxPrefixLength() > 0) {
+      for (SuffixTrie trie : model.prefixTries()) {
+        writeTrie(out, trie);
+      }
     }
   }
 
@@ -268,7 +286,7 @@ public final class ModelFile {
     double[] logBigram = readFloats(in, limits.count(n * n, 4, "bigram entries"));
     double[] logTrigram = readFloats(in, limits.count(n * n * n, 4, "trigram entries"));
     Lexicon lexicon = readLexicon(in, limits, states.size());
-    UnknownWordModel unknown = readUnknownWords(in, limits, tagCount);
+    UnknownWordModel unknown = readUnknownWords(in, limits, tagCount, version, lexicon, states);
     return new HmmModel(order, tags, states, cues, logBigram, logTrigram, lexicon, unknown, provenance);
   }
 
@@ -364,7 +382,9 @@ public final class ModelFile {
     return new Lexicon(entries);
   }
 
-  private static UnknownWordModel readUnknownWords(DataInput in, Limits limits, int tagCount) throws IOException {
+  private static UnknownWordModel readUnknownWords(DataInput in, Limits limits, int tagCount, int version,
+      Lexicon lexicon, StateSpace states)
+      throws IOException {
     double theta = Double.longBitsToDouble(in.readLong());
     int maxSuffix = in.readVInt();
     int openCount = limits.count(in.readVInt(), 1, "open tags");
@@ -373,6 +393,8 @@ public final class ModelFile {
       open[i] = tagIndex(in.readVInt(), tagCount);
     }
     double[] logPrior = readDoubles(in, limits.count(tagCount, 8, "tag priors"));
+    double[] logPriorCapitalised = version >= VERSION_CAPITALISED_PRIORS
+        ? readDoubles(in, limits.count(tagCount, 8, "tag priors of capitalised words")) : logPrior;
     double[] base = readDoubles(in, limits.count(openCount, 8, "open-tag probabilities"));
     int[] trieOfShape = new int[WordShape.values().length];
     for (int i = 0; i < trieOfShape.length; i++) {
@@ -383,7 +405,19 @@ public final class ModelFile {
     for (int i = 0; i < trieCount; i++) {
       tries[i] = readTrie(in, limits, tagCount);
     }
-    return new UnknownWordModel(theta, maxSuffix, open, logPrior, base, trieOfShape, tries);
+    LowerCaseFormCue cue = null;
+    if (version >= VERSION_CAPITALISED_PRIORS && in.readByte() != 0) {
+      double[] logStatePrior = readDoubles(in, limits.count(states.size(), 8, "state priors"));
+      double[] factors = readDoubles(in, limits.count((long) tagCount * openCount, 8, "lower-case form factors"));
+      cue = new LowerCaseFormCue(logStatePrior, factors, tagCount, openCount, lexicon, states);
+    }
+    int maxPrefix = version >= VERSION_CAPITALISED_PRIORS ? in.readVInt() : 0;
+    SuffixTrie[] prefixTries = null;
+    if (maxPrefix > 0) {
+      prefixTries = new SuffixTrie[] {readTrie(in, limits, tagCount), readTrie(in, limits, tagCount)};
+    }
+    return new UnknownWordModel(theta, maxSuffix, open, logPrior, logPriorCapitalised, base, trieOfShape, tries, cue,
+        maxPrefix, prefixTries);
   }
 
   private static SuffixTrie readTrie(DataInput in, Limits limits, int tagCount) throws IOException {

@@ -15,23 +15,40 @@ import java.util.Arrays;
  *       {@code P(t|l_{n-i+1..n}) = (P^(t|l_{n-i+1..n}) + θ P(t|l_{n-i+2..n})) / (1 + θ)};
  *   <li>each spelling shape (see {@link WordShape}) keeps its own counts, abstracted in turn to
  *       the distribution over all rare words;
- *   <li>the result is inverted with Bayes' rule, {@code P(w|t) ∝ P(t|ending) / P(t)}; the
- *       factor {@code P(ending)} is the same for every tag of a token and cancels in decoding.
+ *   <li>where the model has them, two further cues multiply that distribution: what the word's
+ *       lower-case form mostly is, for a word written with a capital ({@link LowerCaseFormCue}),
+ *       and the tags of rare words with the same first letters, {@code P(t | beginning) / P(t)}
+ *       ({@link #prefixFactor}), as if beginning and ending were independent given the tag;
+ *   <li>the result is inverted with Bayes' rule, {@code P(w|s) ∝ P(s|w) / P(s)}; the factor
+ *       {@code P(w)} is the same for every tag of a token and cancels in decoding. The divisor
+ *       is kept twice, for words written with a capital and for the others: where a model
+ *       splits tags by capitalisation, the state a word can take is the tag together with its
+ *       spelling, and dividing by the tag's prior alone would count the spelling twice (once
+ *       in the ending statistics, once in the transitions into the state). Models without that
+ *       split keep {@code P(t)} in both.
  * </ul>
  *
  * <p>Only open-class tags, those seen with rare words in training, are candidates. Scoring one
- * word costs one trie step per character of its ending and one pass over the open tags; the
- * first word to reach an ending also pays one pass per character of it and allocates the
- * ending's scores, which every later word with that ending reads. Safe to share between threads:
- * its parameters never change, and the scores it keeps are published safely.
+ * word costs one trie step per character of its ending and of its beginning, a lookup of its
+ * lower-case form if it is capitalised, and one logarithm per open tag. The distribution of an
+ * ending and the factors of a beginning depend on nothing but the trie node the word reaches, so
+ * they are kept per node, worked out (and allocated, about 100 bytes) by the first word that
+ * reaches it: later words read them. Safe to share between threads: the parameters never change,
+ * and the kept values are published whole (release store, acquire load); two threads filling the
+ * same node compute the same values.
  */
 public final class UnknownWordModel {
   private final double theta;
   private final int maxSuffixLength;
   private final int[] openTags;
   private final double[] logPrior;
+  private final double[] logPriorCapitalised;
   private final double[] baseDistribution;
   private final int[] trieOfShape;
+  private final LowerCaseFormCue lowerCaseForms;
+  private final int maxPrefixLength;
+  private final SuffixTrie[] prefixTries;
+  private final int[][] openOfPrefixCount;
   private final SuffixTrie[] tries;
   /**
    * Per trie, per count entry: the index of its tag among the open tags, or -1 for a closed
@@ -39,23 +56,18 @@ public final class UnknownWordModel {
    * an unknown word is scored with.
    */
   private final int[][] openOfCount;
-  /**
-   * Per trie and node, {@code log P(t | ending)} over the open tags once a word has reached that
-   * node, else null: successive abstraction gives each node one distribution, fixed by its path
-   * from the root, so it is worked out the first time a word ends there and read back for every
-   * later word, instead of once per unknown token. Filled on demand rather than at load time, so
-   * loading stays fast and only the endings text really has take memory (about 100 bytes each).
-   * Threads may fill the same node at once; they compute the same values, and the release store
-   * and acquire load publish each array whole.
-   */
-  private final double[][][] nodeLogDistribution;
+  /** Per trie and node, {@code P(t | ending)} over the open tags once a word has reached it, else null. */
+  private final double[][][] endingDistribution;
+  /** Per beginning trie and node, {@link #prefixFactor} of each open tag once a word has reached it, else null. */
+  private final double[][][] beginningFactors;
   private static final VarHandle NODE = MethodHandles.arrayElementVarHandle(double[][].class);
 
   /**
    * @param theta weight of the shorter ending in successive abstraction
    * @param maxSuffixLength longest ending consulted
    * @param openTags tags an unknown word may take, ascending
-   * @param logPrior {@code log P(t)} over all training tokens, one per tag of the tag set
+   * @param logPrior {@code log P(t)} over all training tokens, one per tag of the tag set, the
+   *     divisor for every word
    * @param baseDistribution tag distribution over all rare words, one per open tag, summing to 1
    * @param trieOfShape index into {@code tries} for each {@link WordShape} ordinal
    * @param tries ending counts, one trie per group of shapes
@@ -68,6 +80,74 @@ public final class UnknownWordModel {
       double[] baseDistribution,
       int[] trieOfShape,
       SuffixTrie[] tries) {
+    this(theta, maxSuffixLength, openTags, logPrior, logPrior, baseDistribution, trieOfShape, tries);
+  }
+
+  /**
+   * @param theta weight of the shorter ending in successive abstraction
+   * @param maxSuffixLength longest ending consulted
+   * @param openTags tags an unknown word may take, ascending
+   * @param logPrior the log prior each tag's probability is divided by, one per tag of the tag
+   *     set, for words not written with a capital (or in a state that does not say so)
+   * @param logPriorCapitalised the same for words in the state of words written with a capital
+   * @param baseDistribution tag distribution over all rare words, one per open tag, summing to 1
+   * @param trieOfShape index into {@code tries} for each {@link WordShape} ordinal
+   * @param tries ending counts, one trie per group of shapes
+   */
+  public UnknownWordModel(
+      double theta,
+      int maxSuffixLength,
+      int[] openTags,
+      double[] logPrior,
+      double[] logPriorCapitalised,
+      double[] baseDistribution,
+      int[] trieOfShape,
+      SuffixTrie[] tries) {
+    this(theta, maxSuffixLength, openTags, logPrior, logPriorCapitalised, baseDistribution, trieOfShape, tries, null);
+  }
+
+  /**
+   * A model that also uses the lower-case form of capitalised words, where {@code lowerCaseForms}
+   * is not null; the other parameters as above.
+   */
+  public UnknownWordModel(
+      double theta,
+      int maxSuffixLength,
+      int[] openTags,
+      double[] logPrior,
+      double[] logPriorCapitalised,
+      double[] baseDistribution,
+      int[] trieOfShape,
+      SuffixTrie[] tries,
+      LowerCaseFormCue lowerCaseForms) {
+    this(theta, maxSuffixLength, openTags, logPrior, logPriorCapitalised, baseDistribution, trieOfShape, tries,
+        lowerCaseForms, 0, null);
+  }
+
+  /**
+   * A model that also weighs an unknown word by its beginning, where {@code maxPrefixLength} is
+   * positive: {@code prefixTries} holds two tries of word beginnings (see {@link
+   * #prefixTries()}); the other parameters as above.
+   */
+  public UnknownWordModel(
+      double theta,
+      int maxSuffixLength,
+      int[] openTags,
+      double[] logPrior,
+      double[] logPriorCapitalised,
+      double[] baseDistribution,
+      int[] trieOfShape,
+      SuffixTrie[] tries,
+      LowerCaseFormCue lowerCaseForms,
+      int maxPrefixLength,
+      SuffixTrie[] prefixTries) {
+    if (maxPrefixLength < 0 || (maxPrefixLength > 0 && (prefixTries == null || prefixTries.length != 2))) {
+      throw new IllegalArgumentException("a model of word beginnings needs two tries and a positive length: "
+          + maxPrefixLength);
+    }
+    if (logPriorCapitalised.length != logPrior.length) {
+      throw new IllegalArgumentException("one prior per tag expected for capitalised words as for the others");
+    }
     if (!(theta > 0) || Double.isInfinite(theta)) {
       throw new IllegalArgumentException("suffix weight must be finite and positive: " + theta);
     }
@@ -86,7 +166,8 @@ public final class UnknownWordModel {
       if (openTags[i] < 0 || openTags[i] >= logPrior.length || (i > 0 && openTags[i] <= openTags[i - 1])) {
         throw new IllegalArgumentException("open tags must be distinct ascending tag indexes");
       }
-      if (!(baseDistribution[i] > 0) || Double.isInfinite(logPrior[openTags[i]])) {
+      if (!(baseDistribution[i] > 0) || !Double.isFinite(logPrior[openTags[i]])
+          || !Double.isFinite(logPriorCapitalised[openTags[i]])) {
         throw new IllegalArgumentException("open tag " + openTags[i] + " has no probability mass");
       }
     }
@@ -94,8 +175,19 @@ public final class UnknownWordModel {
     this.maxSuffixLength = maxSuffixLength;
     this.openTags = openTags.clone();
     this.logPrior = logPrior.clone();
+    this.logPriorCapitalised = logPriorCapitalised.clone();
     this.baseDistribution = baseDistribution.clone();
     this.trieOfShape = trieOfShape.clone();
+    this.lowerCaseForms = lowerCaseForms;
+    this.maxPrefixLength = maxPrefixLength;
+    this.prefixTries = maxPrefixLength > 0 ? prefixTries.clone() : null;
+    this.openOfPrefixCount = maxPrefixLength > 0 ? new int[2][] : null;
+    for (int t = 0; maxPrefixLength > 0 && t < 2; t++) {
+      openOfPrefixCount[t] = new int[prefixTries[t].countTag.length];
+      for (int i = 0; i < openOfPrefixCount[t].length; i++) {
+        openOfPrefixCount[t][i] = Math.max(-1, Arrays.binarySearch(this.openTags, prefixTries[t].countTag[i]));
+      }
+    }
     this.tries = tries.clone();
     this.openOfCount = new int[tries.length][];
     for (int t = 0; t < tries.length; t++) {
@@ -104,10 +196,16 @@ public final class UnknownWordModel {
         openOfCount[t][i] = Math.max(-1, Arrays.binarySearch(this.openTags, tries[t].countTag[i]));
       }
     }
-    this.nodeLogDistribution = new double[tries.length][][];
+    this.endingDistribution = perNode(this.tries);
+    this.beginningFactors = maxPrefixLength > 0 ? perNode(this.prefixTries) : null;
+  }
+
+  private static double[][][] perNode(SuffixTrie[] tries) {
+    double[][][] kept = new double[tries.length][][];
     for (int t = 0; t < tries.length; t++) {
-      nodeLogDistribution[t] = new double[tries[t].nodeCount()][];
+      kept[t] = new double[tries[t].nodeCount()][];
     }
+    return kept;
   }
 
   /** Number of candidate tags of every unknown word. */
@@ -121,12 +219,52 @@ public final class UnknownWordModel {
   }
 
   /**
-   * Writes {@code log P(word | openTag(k))}, up to a constant shared by all k, into {@code out[k]}.
+   * Writes {@code log P(word | openTag(k))}, up to a constant shared by all k, into {@code out[k]},
+   * for the states of words written as this one is: with the capitalised prior if its first
+   * character is a capital letter. That is the state a decoder admits for the word everywhere but
+   * as the first word of a sentence, where no word counts as capitalised; {@link
+   * #logEmissions(char[], int, int, boolean, double[], double[])} takes the state's spelling.
    *
    * @param scratch at least {@link #openTagCount()} long; overwritten
    * @return length of the longest ending that was found in the counts
    */
   public int logEmissions(char[] buf, int off, int len, double[] scratch, double[] out) {
+    return logEmissions(buf, off, len, startsWithCapital(buf, off, len), scratch, out);
+  }
+
+  /**
+   * Writes {@code log P(word | state of openTag(k))}, up to a constant shared by all k, into
+   * {@code out[k]}, for the states of words written with a capital in mid-sentence if {@code
+   * capitalisedState}, otherwise for the others.
+   *
+   * @param scratch at least {@link #openTagCount()} long; overwritten
+   * @return length of the longest ending that was found in the counts
+   */
+  public int logEmissions(char[] buf, int off, int len, boolean capitalisedState, double[] scratch, double[] out) {
+    int depth = endingDistribution(buf, off, len, scratch, out);
+    if (lowerCaseForms != null) {
+      lowerCaseForms.apply(buf, off, len, out);
+    }
+    if (prefixTries != null) {
+      double[] factors = beginningFactors(buf, off, len);
+      for (int k = 0; k < openTags.length; k++) {
+        out[k] *= factors[k];
+      }
+    }
+    double[] prior = capitalisedState ? logPriorCapitalised : logPrior;
+    for (int i = 0; i < openTags.length; i++) {
+      out[i] = Math.log(out[i]) - prior[openTags[i]];
+    }
+    return depth;
+  }
+
+  /**
+   * Writes {@link #tagDistribution} of the word with θ into {@code out}, read from the node its
+   * longest known ending reaches where a word has reached it before.
+   *
+   * @return length of that ending
+   */
+  private int endingDistribution(char[] buf, int off, int len, double[] scratch, double[] out) {
     int t = trieOfShape[WordShape.classify(buf, off, len).ordinal()];
     SuffixTrie trie = tries[t];
     int node = 0;
@@ -134,19 +272,42 @@ public final class UnknownWordModel {
     for (int next; depth < Math.min(len, maxSuffixLength) && (next = trie.child(node, buf[off + len - 1 - depth])) >= 0; depth++) {
       node = next;
     }
-    double[] logDistribution = (double[]) NODE.getAcquire(nodeLogDistribution[t], node);
-    if (logDistribution == null) {
-      logDistribution = new double[openTags.length];
-      tagDistribution(buf, off, len, theta, null, scratch, logDistribution);
-      for (int i = 0; i < logDistribution.length; i++) {
-        logDistribution[i] = Math.log(logDistribution[i]);
-      }
-      NODE.setRelease(nodeLogDistribution[t], node, logDistribution);
+    double[] kept = (double[]) NODE.getAcquire(endingDistribution[t], node);
+    if (kept == null) {
+      kept = new double[openTags.length];
+      tagDistribution(buf, off, len, theta, null, scratch, kept);
+      NODE.setRelease(endingDistribution[t], node, kept);
     }
-    for (int i = 0; i < openTags.length; i++) {
-      out[i] = logDistribution[i] - logPrior[openTags[i]];
-    }
+    System.arraycopy(kept, 0, out, 0, openTags.length);
     return depth;
+  }
+
+  /**
+   * {@link #prefixFactor} of every open tag for the word, kept per node of the beginning trie:
+   * the factor depends only on the deepest node the word's beginning reaches, since abstraction
+   * along the path stops where a node holds no count of an open tag, and so do all nodes below.
+   */
+  private double[] beginningFactors(char[] buf, int off, int len) {
+    int group = WordShape.classify(buf, off, len).capitalisationOnly() == WordShape.CAPITALISED ? 1 : 0;
+    SuffixTrie trie = prefixTries[group];
+    int node = 0;
+    for (int depth = 0, next; depth < Math.min(len, maxPrefixLength)
+        && (next = trie.child(node, Character.toLowerCase(buf[off + depth]))) >= 0; depth++) {
+      node = next;
+    }
+    double[] kept = (double[]) NODE.getAcquire(beginningFactors[group], node);
+    if (kept == null) {
+      kept = new double[openTags.length];
+      for (int k = 0; k < kept.length; k++) {
+        kept[k] = prefixFactor(buf, off, len, k);
+      }
+      NODE.setRelease(beginningFactors[group], node, kept);
+    }
+    return kept;
+  }
+
+  private static boolean startsWithCapital(char[] buf, int off, int len) {
+    return len > 0 && (Character.isUpperCase(buf[off]) || Character.isTitleCase(buf[off]));
   }
 
   /**
@@ -176,6 +337,49 @@ public final class UnknownWordModel {
       abstractTo(trie, openOf, node, weight, heldOut, out, scratch);
     }
     return depth;
+  }
+
+  /**
+   * {@code P(openTag(k) | beginning) / P(openTag(k))} among the rare words of the word's
+   * capitalisation: successive abstraction over the lower-cased first characters, from the
+   * distribution over all rare words through the trie's root (all rare words of that
+   * capitalisation, the divisor) to the longest beginning that was counted. One open tag at a
+   * time, so that it needs no buffer: the path is short and its nodes hold few counts.
+   */
+  double prefixFactor(char[] buf, int off, int len, int k) {
+    int group = WordShape.classify(buf, off, len).capitalisationOnly() == WordShape.CAPITALISED ? 1 : 0;
+    SuffixTrie trie = prefixTries[group];
+    int[] openOf = openOfPrefixCount[group];
+    double dist = baseDistribution[k];
+    double root = Double.NaN;
+    int node = 0;
+    for (int depth = 0; ; depth++) {
+      double counted = 0;
+      double own = 0;
+      for (int i = trie.countStart[node], end = trie.countStart[node + 1]; i < end; i++) {
+        if (openOf[i] >= 0) {
+          counted += trie.countValue[i];
+          if (openOf[i] == k) {
+            own = trie.countValue[i];
+          }
+        }
+      }
+      if (counted == 0) {
+        break;
+      }
+      if (depth == 0) {
+        root = (own + 1.0) / (counted + 1.0 * openTags.length);
+      }
+      dist = (own / counted + theta * dist) / (1 + theta);
+      if (depth == Math.min(len, maxPrefixLength)) {
+        break;
+      }
+      node = trie.child(node, Character.toLowerCase(buf[off + depth]));
+      if (node < 0) {
+        break;
+      }
+    }
+    return Double.isNaN(root) ? 1 : dist / root;
   }
 
   /** dist := (P^(t | node) + θ dist) / (1 + θ), over open tags. */
@@ -226,9 +430,23 @@ public final class UnknownWordModel {
     return logPrior;
   }
 
-  /** {@code log P(tag)} over all training tokens. */
+  double[] logPriorCapitalised() {
+    return logPriorCapitalised;
+  }
+
+  /** The log prior {@code tag}'s probability is divided by for words not written with a capital. */
   public double logPrior(int tag) {
     return logPrior[tag];
+  }
+
+  /** The log prior {@code tag}'s probability is divided by for words in the capitalised state. */
+  public double logPriorCapitalised(int tag) {
+    return logPriorCapitalised[tag];
+  }
+
+  /** Whether words written with a capital are divided by other priors than the rest. */
+  public boolean hasCapitalisedPriors() {
+    return !Arrays.equals(logPrior, logPriorCapitalised);
   }
 
   double[] baseDistribution() {
@@ -243,6 +461,26 @@ public final class UnknownWordModel {
     return tries;
   }
 
+  /** Longest word beginning consulted; 0 if the model does not look at beginnings. */
+  public int maxPrefixLength() {
+    return maxPrefixLength;
+  }
+
+  /**
+   * Counts of word beginnings, or null if the model has none: for words not written with a
+   * capital ([0]) and those that are ([1], {@link WordShape#CAPITALISED} and {@link
+   * WordShape#ALL_CAPS}), tries of the rare training words lower-cased and reversed, so that a
+   * trie's path from the root spells a beginning.
+   */
+  public SuffixTrie[] prefixTries() {
+    return prefixTries == null ? null : prefixTries.clone();
+  }
+
+  /** The cue of the lower-case forms of capitalised words, or null if the model has none. */
+  public LowerCaseFormCue lowerCaseForms() {
+    return lowerCaseForms;
+  }
+
   /** The ending counts words of {@code shape} are scored with; shapes may share one. */
   public SuffixTrie suffixTrie(WordShape shape) {
     return tries[trieOfShape[shape.ordinal()]];
@@ -250,9 +488,17 @@ public final class UnknownWordModel {
 
   /** Approximate heap size in bytes. */
   public long ramBytesUsed() {
-    long bytes = 16L * (openTags.length + logPrior.length);
+    long bytes = 16L * (openTags.length + 2L * logPrior.length);
     for (SuffixTrie t : tries) {
-      bytes += 18L * t.nodeCount() + 10L * t.countTag.length;
+      bytes += 14L * t.nodeCount() + 10L * t.countTag.length;
+    }
+    if (lowerCaseForms != null) {
+      bytes += lowerCaseForms.ramBytesUsed();
+    }
+    if (prefixTries != null) {
+      for (SuffixTrie t : prefixTries) {
+        bytes += 14L * t.nodeCount() + 10L * t.countTag.length;
+      }
     }
     return bytes;
   }

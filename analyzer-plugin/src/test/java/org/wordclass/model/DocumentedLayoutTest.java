@@ -50,7 +50,7 @@ class DocumentedLayoutTest {
   }
 
   private void header() {
-    byte[] expected = {0x3f, (byte) 0xd7, 0x6c, 0x17, 0x0c, 'W', 'o', 'r', 'd', 'C', 'l', 'a', 's', 's', 'H', 'm', 'm', 0, 0, 0, 1};
+    byte[] expected = {0x3f, (byte) 0xd7, 0x6c, 0x17, 0x0c, 'W', 'o', 'r', 'd', 'C', 'l', 'a', 's', 's', 'H', 'm', 'm', 0, 0, 0, 2};
     assertArrayEquals(expected, Arrays.copyOf(bytes, 21));
     in.position(21);
   }
@@ -83,6 +83,7 @@ class DocumentedLayoutTest {
       assertEquals(t, vint());
     }
     assertArrayEquals(u.logPrior(), doubles(model.tags().size()));
+    assertArrayEquals(u.logPriorCapitalised(), doubles(model.tags().size()));
     assertArrayEquals(u.baseDistribution(), doubles(u.openTagCount()));
     for (int t : u.trieOfShape()) {
       assertEquals(t, vint());
@@ -90,6 +91,18 @@ class DocumentedLayoutTest {
     assertEquals(u.tries().length, vint());
     for (SuffixTrie trie : u.tries()) {
       trie(trie);
+    }
+    LowerCaseFormCue cue = u.lowerCaseForms();
+    assertEquals(cue == null ? 0 : 1, in.get());
+    if (cue != null) {
+      assertArrayEquals(cue.logStatePrior(), doubles(model.states().size()));
+      assertArrayEquals(cue.factors(), doubles(model.tags().size() * u.openTagCount()));
+    }
+    assertEquals(u.maxPrefixLength(), vint());
+    if (u.maxPrefixLength() > 0) {
+      for (SuffixTrie trie : u.prefixTries()) {
+        trie(trie);
+      }
     }
   }
 

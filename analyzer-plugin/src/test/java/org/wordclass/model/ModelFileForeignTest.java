@@ -164,6 +164,8 @@ class ModelFileForeignTest {
       out.writeVInt(0); // tag A
       out.writeLong(0);
       out.writeLong(0); // priors
+      out.writeLong(0);
+      out.writeLong(0); // priors of capitalised words
       out.writeLong(Double.doubleToLongBits(1.0)); // base distribution
       for (int i = 0; i < WordShape.values().length; i++) {
         out.writeVInt(0);

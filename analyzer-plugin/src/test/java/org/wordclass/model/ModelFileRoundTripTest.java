@@ -19,7 +19,8 @@ import org.wordclass.testing.TestModels;
 /** Writing and reading a model file gives back the same model; the same model gives the same bytes. */
 class ModelFileRoundTripTest {
   /** Words whose unknown-word scores are compared, one or more per shape and ending in the tries. */
-  private static final List<String> PROBES = List.of("walked", "talked", "stable", "Bern", "BERN", "x", "", "42", "...", "ending");
+  private static final List<String> PROBES = List.of("walked", "talked", "stable", "Bern", "BERN", "x", "", "42", "...", "ending",
+      "Walks", "RUN", "The", "wall", "tab", "Berlin");
 
   @TempDir Path dir;
 
@@ -58,6 +59,54 @@ class ModelFileRoundTripTest {
       reversed.put(keys.get(i), model.provenance().get(keys.get(i)));
     }
     assertArrayEquals(TestModels.bytes(model), TestModels.bytes(withProvenance(model, reversed)));
+  }
+
+  /**
+   * A version-1 file (one prior row in the unknown-word model, no lower-case forms, no beginnings) is still
+   * read, its prior serving words with and without a capital alike. Made from a version-2 file
+   * of a model whose two rows are equal and which has neither lower-case forms nor beginnings, by
+   * dropping the second row and the two bytes that say so and writing header and footer of
+   * version 1.
+   */
+  @Test
+  void versionOneFileIsReadWithOnePriorForEveryWord() throws IOException {
+    HmmModel small = TestModels.small();
+    UnknownWordModel u = small.unknownWords();
+    UnknownWordModel onePrior = new UnknownWordModel(u.theta(), u.maxSuffixLength(), u.openTags(), u.logPrior(),
+        u.baseDistribution(), u.trieOfShape(), u.tries());
+    HmmModel model = new HmmModel(small.order(), small.tags(), small.states(), small.cues(), small.logBigramTable(),
+        small.logTrigramTable(), small.lexicon(), onePrior, small.provenance());
+    byte[] current = TestModels.bytes(model);
+    byte[] row = new byte[8 * u.logPrior().length];
+    java.nio.ByteBuffer.wrap(row).order(java.nio.ByteOrder.LITTLE_ENDIAN).asDoubleBuffer().put(u.logPrior());
+    int first = indexOf(current, row);
+    int second = first + row.length;
+    assertArrayEquals(row, java.util.Arrays.copyOfRange(current, second, second + row.length), "two equal rows");
+    // version 1 has neither the second row nor the two last bytes of the body: the flag of
+    // lower-case forms and the length of beginnings
+    assertEquals(0, current[current.length - 18], "no lower-case forms");
+    assertEquals(0, current[current.length - 17], "no beginnings");
+    byte[] body = new byte[current.length - 21 - 16 - row.length - 2];
+    System.arraycopy(current, 21, body, 0, second - 21);
+    System.arraycopy(current, second + row.length, body, second - 21, current.length - 18 - second - row.length);
+    byte[] versionOne = TestModels.withHeaderAndFooter(ModelFile.VERSION_START, out -> out.writeBytes(body, body.length));
+    HmmModel read = ModelFile.read(versionOne, "v1");
+    assertSameModel(model, read);
+    assertArrayEquals(u.logPrior(), read.unknownWords().logPriorCapitalised());
+    assertArrayEquals(current, TestModels.bytes(read), "written again in the current version");
+  }
+
+  private static int indexOf(byte[] haystack, byte[] needle) {
+    outer:
+    for (int i = 0; i + needle.length <= haystack.length; i++) {
+      for (int j = 0; j < needle.length; j++) {
+        if (haystack[i + j] != needle[j]) {
+          continue outer;
+        }
+      }
+      return i;
+    }
+    throw new AssertionError("prior row not found");
   }
 
   /** The bundled model, read and written again, gives back its own bytes. */
@@ -108,6 +157,17 @@ class ModelFileRoundTripTest {
     assertEquals(expected.maxSuffixLength(), actual.maxSuffixLength());
     assertArrayEquals(expected.openTags(), actual.openTags());
     assertArrayEquals(expected.logPrior(), actual.logPrior());
+    assertArrayEquals(expected.logPriorCapitalised(), actual.logPriorCapitalised());
+    assertEquals(expected.maxPrefixLength(), actual.maxPrefixLength());
+    for (int i = 0; expected.maxPrefixLength() > 0 && i < 2; i++) {
+      assertSameTrie(expected.prefixTries()[i], actual.prefixTries()[i]);
+    }
+    assertEquals(expected.lowerCaseForms() == null, actual.lowerCaseForms() == null);
+    if (expected.lowerCaseForms() != null) {
+      assertArrayEquals(expected.lowerCaseForms().logStatePrior(), actual.lowerCaseForms().logStatePrior());
+      assertArrayEquals(expected.lowerCaseForms().factors(), actual.lowerCaseForms().factors());
+      assertEquals(expected.lowerCaseForms().forms().size(), actual.lowerCaseForms().forms().size());
+    }
     assertArrayEquals(expected.baseDistribution(), actual.baseDistribution());
     assertArrayEquals(expected.trieOfShape(), actual.trieOfShape());
     assertEquals(expected.tries().length, actual.tries().length);

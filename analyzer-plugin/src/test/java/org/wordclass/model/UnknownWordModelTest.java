@@ -6,11 +6,12 @@ import java.util.Random;
 import org.junit.jupiter.api.Test;
 
 /**
- * The unknown-word scores the decoder reads, kept per suffix-trie node once a word has ended
- * there, against successive abstraction done word by word along the word's endings (the formula
- * of Brants 2000, as {@link UnknownWordModel#tagDistribution} applies it): both must give the same
- * bits for every word, whatever its shape and however deep its ending is known, whether the node
- * was reached first by this word or by another one with the same known ending.
+ * The unknown-word scores the decoder reads, kept per trie node once a word has reached it,
+ * against the same scores worked out word by word: successive abstraction along the word's
+ * endings (the formula of Brants 2000, as {@link UnknownWordModel#tagDistribution} applies it),
+ * the lower-case form's factors and the beginning's, then Bayes' rule. Both must give the same
+ * bits for every word, whatever its shape and however deep its ending and beginning are known,
+ * whether a node was reached first by this word or by another one.
  */
 class UnknownWordModelTest {
   private static final String[] WORDS = {
@@ -42,10 +43,19 @@ class UnknownWordModelTest {
     char[] chars = word.toCharArray();
     double[] expected = new double[k];
     int expectedDepth = model.tagDistribution(chars, 0, chars.length, model.theta(), null, new double[k], expected);
+    if (model.lowerCaseForms() != null) {
+      model.lowerCaseForms().apply(chars, 0, chars.length, expected);
+    }
+    for (int i = 0; i < k && model.maxPrefixLength() > 0; i++) {
+      expected[i] *= model.prefixFactor(chars, 0, chars.length, i);
+    }
+    boolean capitalised = !word.isEmpty() && Character.isUpperCase(word.charAt(0));
     double[] actual = new double[k];
-    assertEquals(expectedDepth, model.logEmissions(chars, 0, chars.length, new double[k], actual), "ending length of '" + word + "'");
+    assertEquals(expectedDepth, model.logEmissions(chars, 0, chars.length, capitalised, new double[k], actual),
+        "ending length of '" + word + "'");
     for (int i = 0; i < k; i++) {
-      double logP = Math.log(expected[i]) - model.logPrior(model.openTag(i));
+      int tag = model.openTag(i);
+      double logP = Math.log(expected[i]) - (capitalised ? model.logPriorCapitalised(tag) : model.logPrior(tag));
       assertEquals(Double.doubleToLongBits(logP), Double.doubleToLongBits(actual[i]),
           "'" + word + "', open tag " + i + ": " + logP + " vs " + actual[i]);
     }

@@ -14,7 +14,9 @@ import org.apache.lucene.store.IndexOutput;
 import org.apache.lucene.store.OutputStreamIndexOutput;
 import org.wordclass.model.HmmModel;
 import org.wordclass.model.Lexicon;
+import org.wordclass.model.LowerCaseFormCue;
 import org.wordclass.model.ModelFile;
+import org.wordclass.model.StateSpace;
 import org.wordclass.model.SuffixTrie;
 import org.wordclass.model.TagSet;
 import org.wordclass.model.UnknownWordModel;
@@ -144,11 +146,12 @@ public final class TestModels {
         new Lexicon.Entry("Zürich", new int[] {1}, new float[] {-6.5f}),
         new Lexicon.Entry("walks", new int[] {1, 2}, new float[] {-5.0f, -4.75f}));
     Map<String, String> provenance = new TreeMap<>(Map.of("corpus", "invented.conllu", "tokens", "42", "builder", "test"));
+    Lexicon lexicon = new Lexicon(entries);
     return new HmmModel(2, new TagSet(List.of("DET", "NOUN", "VERB")), randomLogRows(rnd, states, states),
-        randomLogRows(rnd, states * states, states), new Lexicon(entries), smallUnknownWords(), provenance);
+        randomLogRows(rnd, states * states, states), lexicon, smallUnknownWords(lexicon), provenance);
   }
 
-  private static UnknownWordModel smallUnknownWords() {
+  private static UnknownWordModel smallUnknownWords(Lexicon lexicon) {
     SuffixTrie.Builder lower = new SuffixTrie.Builder();
     lower.add("walked", 2, 3, 4);
     lower.add("talked", 2, 2, 4);
@@ -157,8 +160,20 @@ public final class TestModels {
     SuffixTrie.Builder upper = new SuffixTrie.Builder();
     upper.add("Bern", 1, 5, 4);
     int[] trieOfShape = {0, 1, 1, 0, 0};
+    // words written with a capital are divided by other priors than the rest, as with capitalisation states
+    // beginnings, counted lower-cased and reversed ("walked" as "deklaw")
+    SuffixTrie.Builder lowerBeginnings = new SuffixTrie.Builder();
+    lowerBeginnings.add("deklaw", 2, 3, 3);
+    lowerBeginnings.add("elbat", 1, 4, 3);
+    SuffixTrie.Builder upperBeginnings = new SuffixTrie.Builder();
+    upperBeginnings.add("nreb", 1, 5, 3);
+        // and capitalised words known in lower case ("Walks", "RUN") are weighed by that form's tag
+    LowerCaseFormCue cue = new LowerCaseFormCue(new double[] {Math.log(0.5), Math.log(0.3), Math.log(0.2)},
+        new double[] {1, 1, 1.5, 0.5, 0.25, 3}, 3, 2, lexicon, StateSpace.oneStatePerTag(3));
     return new UnknownWordModel(0.75, 4, new int[] {1, 2}, new double[] {Math.log(0.4), Math.log(0.35), Math.log(0.25)},
-        new double[] {0.6, 0.4}, trieOfShape, new SuffixTrie[] {lower.build(), upper.build()});
+        new double[] {Math.log(0.5), Math.log(0.45), Math.log(0.05)}, new double[] {0.6, 0.4}, trieOfShape,
+        new SuffixTrie[] {lower.build(), upper.build()}, cue, 3, new SuffixTrie[] {lowerBeginnings.build(),
+            upperBeginnings.build()});
   }
 
   /** The bytes {@link ModelFile#write(HmmModel, IndexOutput)} produces for {@code model}. */

@@ -93,7 +93,10 @@ final class InspectCommand extends BaseCommand {
     }
   }
 
-  /** Nodes of each suffix trie, keyed by the word shapes that share it ({@code LOWER+ALL_CAPS}). */
+  /**
+   * Nodes of each suffix trie, keyed by the word shapes that share it ({@code LOWER+ALL_CAPS}),
+   * then of the tries of word beginnings where the model has them ({@code beginnings: ...}).
+   */
   private static Map<String, Integer> trieSizes(HmmModel m) {
     Map<SuffixTrie, String> shapesOfTrie = new IdentityHashMap<>();
     Map<String, Integer> sizes = new LinkedHashMap<>();
@@ -106,6 +109,11 @@ final class InspectCommand extends BaseCommand {
     }
     for (SuffixTrie trie : order) {
       sizes.put(shapesOfTrie.get(trie), trie.nodeCount());
+    }
+    SuffixTrie[] beginnings = m.unknownWords().prefixTries();
+    if (beginnings != null) {
+      sizes.put("beginnings: LOWER+HAS_DIGIT+NO_LETTER", beginnings[0].nodeCount());
+      sizes.put("beginnings: CAPITALISED+ALL_CAPS", beginnings[1].nodeCount());
     }
     return sizes;
   }

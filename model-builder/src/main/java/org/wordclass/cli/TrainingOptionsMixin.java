@@ -28,6 +28,11 @@ final class TrainingOptionsMixin {
       description = "Longest word ending the unknown-word model counts. Default: ${DEFAULT-VALUE}.")
   int maxSuffixLength;
 
+  @Option(names = "--max-prefix-length", paramLabel = "N",
+      description = "Longest word beginning whose classes weigh an unknown word's classes beside its ending; "
+          + "0 to look at endings only. Default: ${DEFAULT-VALUE}.")
+  int maxPrefixLength;
+
   @Option(names = "--rare-word-max-count", paramLabel = "N",
       description = "Words seen at most this often teach the unknown-word model. Default: ${DEFAULT-VALUE}.")
   int rareWordMaxCount;
@@ -73,9 +78,23 @@ final class TrainingOptionsMixin {
   @Option(names = "--latent-rounds", paramLabel = "N",
       description = "Rounds of split-merge training: each splits every hidden state of a class in two, fits "
           + "the halves to the tagged corpus by EM and merges back the splits that help least; 0 for none. "
-          + "Context-dependent emissions are then left out. Slower decoding and a larger model; best with "
+          + "Context-dependent emissions and the lower-case forms of unknown words are then left out. Slower "
+          + "decoding and a larger model; best with "
           + "--order 1 (see docs/latent-states.md). Default: ${DEFAULT-VALUE}.")
   int latentRounds;
+
+  @Option(names = "--unknown-word-prior", paramLabel = "tag|state|lower-case-state|rare-tag|rare-state",
+      description = "What an unknown word's class probability from its ending is divided by to score it: the "
+          + "class's share of all training words (tag), the share of its hidden state, which also says "
+          + "whether the word is written with a capital (state), the state's for words written without a "
+          + "capital and the class's for the others (lower-case-state), or either share among rare words only "
+          + "(rare-tag, rare-state). Default: ${DEFAULT-VALUE}.")
+  String unknownWordPrior;
+
+  @Option(names = "--lower-case-forms", negatable = true, fallbackValue = "true",
+      description = "Weigh the classes of an unknown word written with a capital by what its lower-case form "
+          + "mostly is, where that form is a known word (Customer by customer, a noun). Default: ${DEFAULT-VALUE}.")
+  boolean lowerCaseForms;
 
   @Option(names = "--min-tag-share", paramLabel = "SHARE",
       description = "Leave a word/tag pair out of the lexicon when fewer than this share of the word's "
@@ -88,11 +107,24 @@ final class TrainingOptionsMixin {
     try {
       TrainingOptions options = new TrainingOptions(order, maxSuffixLength, rareWordMaxCount,
           TrainingOptions.SuffixWeightRule.HELD_OUT, Double.NaN, openClassMinShare, shapeClasses,
-          capitalisationStates, contextEmissions, lowercaseFirstWord, contextMinCount, latentRounds, minTagShare);
+          capitalisationStates, contextEmissions, lowercaseFirstWord, contextMinCount, latentRounds,
+          unknownWordPrior(unknownWordPrior), lowerCaseForms, maxPrefixLength, minTagShare);
       return withSuffixWeight(options, suffixWeight);
     } catch (IllegalArgumentException e) {
       throw new ParameterException(mixee.commandLine(), "Invalid training option: " + e.getMessage());
     }
+  }
+
+  /** Reads a prior's name as {@link TrainingOptions#describe()} writes it. */
+  private TrainingOptions.UnknownWordPrior unknownWordPrior(String value) {
+    for (TrainingOptions.UnknownWordPrior prior : TrainingOptions.UnknownWordPrior.values()) {
+      if (value.equalsIgnoreCase(prior.name().replace('_', '-'))) {
+        return prior;
+      }
+    }
+    throw new ParameterException(mixee.commandLine(),
+        "Invalid value for --unknown-word-prior: '" + value
+            + "' is not one of tag, state, lower-case-state, rare-tag, rare-state");
   }
 
   /** Reads a rule name or a number. */

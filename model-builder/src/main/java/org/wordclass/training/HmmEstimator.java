@@ -8,6 +8,8 @@ import java.util.Map;
 import java.util.TreeMap;
 import org.wordclass.model.HmmModel;
 import org.wordclass.model.Lexicon;
+import org.wordclass.model.LowerCaseFormCue;
+import org.wordclass.model.LowerCaseForms;
 import org.wordclass.model.StateSpace;
 import org.wordclass.model.SuffixTrie;
 import org.wordclass.model.TagSet;
@@ -27,7 +29,9 @@ import org.wordclass.model.WordShape;
  *       conditioned on the previous state (Thede and Harper 1999), smoothed back to {@code P(w|s)};
  *   <li>states: one per tag, or, where enabled, tags split by whether the word was written with
  *       a capital in mid-sentence (Brants 2000);
- *   <li>unknown words: see {@link UnknownWordModel};
+ *   <li>unknown words: see {@link UnknownWordModel}; the priors their tag probabilities are
+ *       divided by, the factors of lower-case forms and the counts of word beginnings are
+ *       estimated here as the options say;
  *   <li>where enabled, latent sub-states of every state, fitted by split-merge training (see
  *       {@link LatentStates}).
  * </ul>
@@ -71,7 +75,8 @@ public final class HmmEstimator {
     long[] tagTokens = new long[tagCount];
     wordTags.values().forEach(tags -> tags.forEach((tag, count) -> tagTokens[finalId[tag + 1]] += count));
     List<Lexicon.Entry> entries = lexiconEntries(counts, plan, tri, n);
-    UnknownWordModel unknown = unknownWordModel(counts, wordTags, finalId, tagTokens, tagSet);
+    Lexicon lexicon = new Lexicon(entries);
+    UnknownWordModel unknown = unknownWordModel(counts, wordTags, finalId, tagTokens, tagSet, lexicon, plan);
     HmmModel.DecodingCues cues = new HmmModel.DecodingCues(options.lowercaseFirstWord(),
         options.contextEmissions() ? Math.log(1 - contextWeight(0)) : 0);
 
@@ -83,7 +88,7 @@ public final class HmmEstimator {
     all.put("smoothing.bigramWeights", transitions.describeBigramWeights());
     all.put("smoothing.suffixWeight", Double.toString(unknown.theta()));
     HmmModel model = new HmmModel(options.order(), tagSet, plan.space(), cues, transitions.logBigram(),
-        transitions.logTrigram(), new Lexicon(entries), unknown, all);
+        transitions.logTrigram(), lexicon, unknown, all);
     return options.latentRounds() == 0 ? model : withLatentStates(model, counts);
   }
 
@@ -193,13 +198,12 @@ public final class HmmEstimator {
   }
 
   private UnknownWordModel unknownWordModel(TagCounts counts, Map<String, Map<Integer, Integer>> wordTags, int[] finalId,
-      long[] tagTokens, TagSet tagSet) {
+      long[] tagTokens, TagSet tagSet, Lexicon lexicon, StatePlan plan) {
     int tagCount = tagSet.size();
     long total = Arrays.stream(tagTokens).sum();
-    double[] logPrior = new double[tagCount];
-    for (int t = 0; t < tagCount; t++) {
-      logPrior[t] = Math.log((double) tagTokens[t] / total);
-    }
+    double[][] priors = unknownWordPriors(counts, finalId, tagTokens, tagCount);
+    double[] logPrior = priors[0];
+    double[] logPriorCapitalised = priors[1];
     int[] openTags = openTags(wordTags, finalId, tagCount);
     int[] trieOfShape = trieOfShape();
     int trieCount = Arrays.stream(trieOfShape).max().getAsInt() + 1;
@@ -207,6 +211,7 @@ public final class HmmEstimator {
     for (int i = 0; i < trieCount; i++) {
       builders[i] = new SuffixTrie.Builder();
     }
+    SuffixTrie.Builder[] prefixBuilders = {new SuffixTrie.Builder(), new SuffixTrie.Builder()};
     long[] rareByTag = new long[tagCount];
     TreeMap<String, Map<Integer, Integer>> byWord = new TreeMap<>(wordTags);
     for (Map.Entry<String, Map<Integer, Integer>> word : byWord.entrySet()) {
@@ -216,10 +221,16 @@ public final class HmmEstimator {
       }
       String w = word.getKey();
       char[] chars = w.toCharArray();
-      SuffixTrie.Builder trie = builders[trieOfShape[WordShape.classify(chars, 0, chars.length).ordinal()]];
+      WordShape shape = WordShape.classify(chars, 0, chars.length);
+      SuffixTrie.Builder trie = builders[trieOfShape[shape.ordinal()]];
+      boolean capitalised = shape.capitalisationOnly() == WordShape.CAPITALISED;
+      String beginnings = options.maxPrefixLength() > 0 ? lowerCasedReversed(chars) : null;
       for (Map.Entry<Integer, Integer> e : new TreeMap<>(word.getValue()).entrySet()) {
         int tag = finalId[e.getKey() + 1];
         trie.add(w, tag, e.getValue(), options.maxSuffixLength());
+        if (options.maxPrefixLength() > 0) {
+          prefixBuilders[capitalised ? 1 : 0].add(beginnings, tag, e.getValue(), options.maxPrefixLength());
+        }
         rareByTag[tag] += e.getValue();
       }
     }
@@ -237,13 +248,119 @@ public final class HmmEstimator {
     for (int i = 0; i < trieCount; i++) {
       tries[i] = builders[i].build();
     }
-    UnknownWordModel model = new UnknownWordModel(1.0, options.maxSuffixLength(), openTags, logPrior, base, trieOfShape, tries);
+    UnknownWordModel model = new UnknownWordModel(1.0, options.maxSuffixLength(), openTags, logPrior,
+        logPriorCapitalised, base, trieOfShape, tries);
     double theta = switch (options.suffixWeightRule()) {
       case HELD_OUT -> SuffixWeightSelection.choose(model, wordTags, finalId, options.rareWordMaxCount());
       case TAG_SPREAD -> tagProbabilitySpread(tagTokens, total);
       case FIXED -> options.suffixWeight();
     };
-    return new UnknownWordModel(theta, options.maxSuffixLength(), openTags, logPrior, base, trieOfShape, tries);
+    // the cue picks a lower-case form's tag by the priors of the supervised states, which latent
+    // sub-states replace: a model with latent states goes without it
+    LowerCaseFormCue cue = options.lowerCaseForms() && options.latentRounds() == 0
+        ? lowerCaseFormCue(counts, wordTags, finalId, openTags, tagCount, lexicon, plan) : null;
+    SuffixTrie[] prefixTries = options.maxPrefixLength() > 0
+        ? new SuffixTrie[] {prefixBuilders[0].build(), prefixBuilders[1].build()} : null;
+    return new UnknownWordModel(theta, options.maxSuffixLength(), openTags, logPrior, logPriorCapitalised, base,
+        trieOfShape, tries, cue, options.maxPrefixLength(), prefixTries);
+  }
+
+  /**
+   * The word lower-cased character by character and reversed: counted as endings, its endings
+   * are the word's beginnings, as {@link UnknownWordModel} reads them.
+   */
+  static String lowerCasedReversed(char[] chars) {
+    char[] out = new char[chars.length];
+    for (int i = 0; i < chars.length; i++) {
+      out[chars.length - 1 - i] = Character.toLowerCase(chars[i]);
+    }
+    return new String(out);
+  }
+
+  /**
+   * The factors of {@link LowerCaseFormCue}, counted over the rare training words written with a
+   * capital: for each tag X, {@code P(t | lower-case form mostly X) / P(t)} among them, where
+   * {@code P(t | X)} is smoothed towards {@code P(t)} with the weight of half a word per open tag,
+   * so that a tag X seen with few such words keeps factors near 1.
+   */
+  private LowerCaseFormCue lowerCaseFormCue(TagCounts counts, Map<String, Map<Integer, Integer>> wordTags, int[] finalId,
+      int[] openTags, int tagCount, Lexicon lexicon, StatePlan plan) {
+    int open = openTags.length;
+    long[] stateTokens = new long[plan.size()];
+    counts.wordStates().values().forEach(states -> states.forEach((raw, n) -> stateTokens[plan.stateOf(raw)] += n));
+    long total = Arrays.stream(stateTokens).sum();
+    double[] logStatePrior = new double[plan.size()];
+    for (int s = 0; s < plan.size(); s++) {
+      logStatePrior[s] = Math.log((double) stateTokens[s] / total);
+    }
+    LowerCaseForms forms = new LowerCaseForms(lexicon, plan.space(), logStatePrior);
+    double[] all = new double[open];
+    double[][] byForm = new double[tagCount][open];
+    for (Map.Entry<String, Map<Integer, Integer>> word : new TreeMap<>(wordTags).entrySet()) {
+      Map<Integer, Integer> tags = word.getValue();
+      char[] chars = word.getKey().toCharArray();
+      if (tags.values().stream().mapToInt(Integer::intValue).sum() > options.rareWordMaxCount()
+          || WordShape.classify(chars, 0, chars.length).capitalisationOnly() != WordShape.CAPITALISED) {
+        continue;
+      }
+      int form = forms.tagOfLowerCased(chars, 0, chars.length);
+      for (Map.Entry<Integer, Integer> e : tags.entrySet()) {
+        int k = Arrays.binarySearch(openTags, finalId[e.getKey() + 1]);
+        if (k >= 0) {
+          all[k] += e.getValue();
+          if (form >= 0) {
+            byForm[form][k] += e.getValue();
+          }
+        }
+      }
+    }
+    double pseudo = 0.5 * open;
+    double allTotal = Arrays.stream(all).sum();
+    double[] factors = new double[tagCount * open];
+    for (int x = 0; x < tagCount; x++) {
+      double rowTotal = Arrays.stream(byForm[x]).sum();
+      for (int k = 0; k < open; k++) {
+        double p = (all[k] + 0.5) / (allTotal + pseudo);
+        double q = (byForm[x][k] + pseudo * p) / (rowTotal + pseudo);
+        factors[x * open + k] = q / p;
+      }
+    }
+    return new LowerCaseFormCue(logStatePrior, factors, tagCount, open, lexicon, plan.space());
+  }
+
+  /**
+   * The log priors an unknown word's tag probability is divided by, for words not written with a
+   * capital in mid-sentence ([0]) and for those that are ([1]), as {@link
+   * TrainingOptions#unknownWordPrior()} says: the tag's or the state's share of all tokens or of
+   * the tokens of rare words. Without capitalisation states a state is a tag, and both are the
+   * tag's. A tag never seen in the counted tokens (a closed class among rare words) gets the
+   * share of half a token, so that its prior stays finite.
+   */
+  double[][] unknownWordPriors(TagCounts counts, int[] finalId, long[] tagTokens, int tagCount) {
+    TrainingOptions.UnknownWordPrior rule = options.unknownWordPrior();
+    boolean rareOnly = rule == TrainingOptions.UnknownWordPrior.RARE_TAG
+        || rule == TrainingOptions.UnknownWordPrior.RARE_STATE;
+    boolean byState = options.capitalisationStates() && (rule == TrainingOptions.UnknownWordPrior.STATE
+        || rule == TrainingOptions.UnknownWordPrior.RARE_STATE
+        || rule == TrainingOptions.UnknownWordPrior.LOWER_CASE_STATE);
+    boolean capitalisedByTag = rule == TrainingOptions.UnknownWordPrior.LOWER_CASE_STATE;
+    long[][] tokens = new long[2][tagCount];
+    for (Map<Integer, Integer> states : counts.wordStates().values()) {
+      if (rareOnly && states.values().stream().mapToInt(Integer::intValue).sum() > options.rareWordMaxCount()) {
+        continue;
+      }
+      states.forEach((raw, count) -> tokens[byState && TagCounts.isCapitalised(raw) ? 1 : 0]
+          [finalId[TagCounts.tagOfRawState(raw) + 1]] += count);
+    }
+    long total = Arrays.stream(tokens[0]).sum() + Arrays.stream(tokens[1]).sum();
+    double[][] logPriors = new double[2][tagCount];
+    for (int c = 0; c < 2; c++) {
+      for (int t = 0; t < tagCount; t++) {
+        long n = !byState ? tokens[0][t] : c == 1 && capitalisedByTag ? tokens[0][t] + tokens[1][t] : tokens[c][t];
+        logPriors[c][t] = Math.log(Math.max(n, 0.5) / total);
+      }
+    }
+    return logPriors;
   }
 
   /** Tags carried by at least the configured share of the words seen exactly once. */

@@ -3,6 +3,7 @@ package org.wordclass.training;
 import java.util.LinkedHashMap;
 import java.util.Locale;
 import java.util.Map;
+import java.util.function.Consumer;
 
 /**
  * Everything that shapes a trained model besides its corpus. Every value is written into the
@@ -30,6 +31,14 @@ import java.util.Map;
  *     fits the halves to the tagged corpus by EM and merges back the splits that help least (see
  *     {@code LatentStates}); 0 keeps the states of the supervised model. A model with latent
  *     states has no context-dependent emissions, whatever {@code contextEmissions} says
+ * @param unknownWordPrior what the suffix model's {@code P(t | ending)} is divided by to give an
+ *     unknown word's emission: the prior of the tag or of the hidden state, over all tokens or
+ *     over rare words
+ * @param lowerCaseForms weigh the tags of an unknown capitalised word by what its lower-case
+ *     form, where known, mostly is ("Customer" by "customer", a noun); see {@code
+ *     org.wordclass.model.LowerCaseFormCue}; a model with latent states goes without it
+ * @param maxPrefixLength longest word beginning whose tag distribution (over rare words) weighs
+ *     an unknown word's tags beside its ending; 0 to look at endings only
  * @param minTagShare a known word keeps a tag only if at least this share of its training
  *     occurrences carry it; rarer word/tag pairs, mostly annotation slips in frequent words
  *     ("the" as a proper noun), are left out of the lexicon, which spares the decoder their
@@ -49,16 +58,19 @@ public record TrainingOptions(
     boolean lowercaseFirstWord,
     int contextMinCount,
     int latentRounds,
+    UnknownWordPrior unknownWordPrior,
+    boolean lowerCaseForms,
+    int maxPrefixLength,
     double minTagShare) {
 
-  /** Default of {@link #minTagShare}, chosen on EWT dev (see docs/accuracy.md). */
-  public static final double MIN_TAG_SHARE = 0.002;
-
   public static final TrainingOptions DEFAULTS =
-      new TrainingOptions(2, 10, 10, SuffixWeightRule.HELD_OUT, Double.NaN, 0.002, false, true, true, true, 3, 0, MIN_TAG_SHARE);
+      new TrainingOptions(2, 10, 10, SuffixWeightRule.HELD_OUT, Double.NaN, 0.002, false, true, true, true, 3, 0,
+          UnknownWordPrior.LOWER_CASE_STATE, true, 4, 0.002);
 
   /** The classic second-order model with a suffix model and none of the later cues. */
-  public static final TrainingOptions CLASSIC = DEFAULTS.withCues(false, false, false);
+  public static final TrainingOptions CLASSIC =
+      DEFAULTS.withCues(false, false, false).withUnknownWordPrior(UnknownWordPrior.TAG).withLowerCaseForms(false)
+          .withMaxPrefixLength(0);
 
   /** How θ of the suffix model is chosen. */
   public enum SuffixWeightRule {
@@ -70,7 +82,33 @@ public record TrainingOptions(
     FIXED
   }
 
+  /**
+   * What an unknown word's tag probability from its ending is divided by to become an emission
+   * ({@code P(w|s) ∝ P(s|w) / P(s)}, Bayes' rule).
+   */
+  public enum UnknownWordPrior {
+    /** {@code P(t)}, the tag's share of all training tokens, whatever the state (Brants 2000). */
+    TAG,
+    /**
+     * {@code P(s)}, the share of the hidden state: the tag together with whether the word is
+     * written with a capital, the state the decoder admits for the word.
+     */
+    STATE,
+    /**
+     * {@code P(s)} for words not written with a capital, {@code P(t)} for the others: the
+     * state's prior where the spelling alone says the state, whatever the word's place.
+     */
+    LOWER_CASE_STATE,
+    /** {@code P(t)} over the tokens of rare words only. */
+    RARE_TAG,
+    /** {@code P(s)} over the tokens of rare words only. */
+    RARE_STATE
+  }
+
   public TrainingOptions {
+    if (unknownWordPrior == null) {
+      throw new IllegalArgumentException("an unknown-word prior must be given");
+    }
     if (order != 1 && order != 2) {
       throw new IllegalArgumentException("order must be 1 or 2, not " + order);
     }
@@ -86,6 +124,9 @@ public record TrainingOptions(
     if (latentRounds < 0 || latentRounds > LatentStates.MAX_ROUNDS) {
       throw new IllegalArgumentException("latent rounds must be in 0.." + LatentStates.MAX_ROUNDS + ": " + latentRounds);
     }
+    if (maxPrefixLength < 0) {
+      throw new IllegalArgumentException("maximum prefix length must not be negative: " + maxPrefixLength);
+    }
     if (!(minTagShare >= 0 && minTagShare < 1)) {
       throw new IllegalArgumentException("minimum tag share must be in [0, 1): " + minTagShare);
     }
@@ -98,54 +139,124 @@ public record TrainingOptions(
   }
 
   public TrainingOptions withOrder(int newOrder) {
-    return new TrainingOptions(newOrder, maxSuffixLength, rareWordMaxCount, suffixWeightRule, suffixWeight,
-        openClassMinShare, shapeClasses, capitalisationStates, contextEmissions, lowercaseFirstWord, contextMinCount, latentRounds, minTagShare);
+    return copy(b -> b.order = newOrder);
   }
 
   /** A fixed θ. */
   public TrainingOptions withSuffixWeight(double weight) {
-    return new TrainingOptions(order, maxSuffixLength, rareWordMaxCount, SuffixWeightRule.FIXED, weight,
-        openClassMinShare, shapeClasses, capitalisationStates, contextEmissions, lowercaseFirstWord, contextMinCount, latentRounds, minTagShare);
+    return copy(b -> {
+      b.suffixWeightRule = SuffixWeightRule.FIXED;
+      b.suffixWeight = weight;
+    });
   }
 
   /** θ chosen by a rule rather than given. */
   public TrainingOptions withSuffixWeightRule(SuffixWeightRule rule) {
-    return new TrainingOptions(order, maxSuffixLength, rareWordMaxCount, rule, Double.NaN,
-        openClassMinShare, shapeClasses, capitalisationStates, contextEmissions, lowercaseFirstWord, contextMinCount, latentRounds, minTagShare);
+    return copy(b -> {
+      b.suffixWeightRule = rule;
+      b.suffixWeight = Double.NaN;
+    });
   }
 
   public TrainingOptions withShapeClasses(boolean shapes) {
-    return new TrainingOptions(order, maxSuffixLength, rareWordMaxCount, suffixWeightRule, suffixWeight,
-        openClassMinShare, shapes, capitalisationStates, contextEmissions, lowercaseFirstWord, contextMinCount, latentRounds, minTagShare);
+    return copy(b -> b.shapeClasses = shapes);
   }
 
   public TrainingOptions withSuffix(int maxLength, int rareMaxCount) {
-    return new TrainingOptions(order, maxLength, rareMaxCount, suffixWeightRule, suffixWeight,
-        openClassMinShare, shapeClasses, capitalisationStates, contextEmissions, lowercaseFirstWord, contextMinCount, latentRounds, minTagShare);
+    return copy(b -> {
+      b.maxSuffixLength = maxLength;
+      b.rareWordMaxCount = rareMaxCount;
+    });
   }
 
   public TrainingOptions withOpenClassMinShare(double share) {
-    return new TrainingOptions(order, maxSuffixLength, rareWordMaxCount, suffixWeightRule, suffixWeight,
-        share, shapeClasses, capitalisationStates, contextEmissions, lowercaseFirstWord, contextMinCount, latentRounds, minTagShare);
+    return copy(b -> b.openClassMinShare = share);
   }
 
   /** The three cues beyond the classic model, each on or off. */
   public TrainingOptions withCues(boolean capitalisation, boolean context, boolean lowercaseFirst) {
-    return new TrainingOptions(order, maxSuffixLength, rareWordMaxCount, suffixWeightRule, suffixWeight,
-        openClassMinShare, shapeClasses, capitalisation, context, lowercaseFirst, contextMinCount, latentRounds, minTagShare);
-  }
-
-  /** The lexicon's minimum tag share (0 keeps every word/tag pair). */
-  public TrainingOptions withMinTagShare(double share) {
-    return new TrainingOptions(order, maxSuffixLength, rareWordMaxCount, suffixWeightRule, suffixWeight,
-        openClassMinShare, shapeClasses, capitalisationStates, contextEmissions, lowercaseFirstWord, contextMinCount,
-        latentRounds, share);
+    return copy(b -> {
+      b.capitalisationStates = capitalisation;
+      b.contextEmissions = context;
+      b.lowercaseFirstWord = lowercaseFirst;
+    });
   }
 
   /** Rounds of latent sub-state splitting (0 for none). */
   public TrainingOptions withLatentRounds(int rounds) {
-    return new TrainingOptions(order, maxSuffixLength, rareWordMaxCount, suffixWeightRule, suffixWeight,
-        openClassMinShare, shapeClasses, capitalisationStates, contextEmissions, lowercaseFirstWord, contextMinCount, rounds, minTagShare);
+    return copy(b -> b.latentRounds = rounds);
+  }
+
+  /** What the ending-based tag probability of an unknown word is divided by. */
+  public TrainingOptions withUnknownWordPrior(UnknownWordPrior prior) {
+    return copy(b -> b.unknownWordPrior = prior);
+  }
+
+  /** Whether unknown capitalised words are weighed by the tag of their lower-case form. */
+  public TrainingOptions withLowerCaseForms(boolean use) {
+    return copy(b -> b.lowerCaseForms = use);
+  }
+
+  /** Longest word beginning the unknown-word model counts; 0 for none. */
+  public TrainingOptions withMaxPrefixLength(int length) {
+    return copy(b -> b.maxPrefixLength = length);
+  }
+
+  /** The lexicon's minimum tag share (0 keeps every word/tag pair). */
+  public TrainingOptions withMinTagShare(double share) {
+    return copy(b -> b.minTagShare = share);
+  }
+
+  /** These options with the changes {@code edit} makes, checked like any others. */
+  private TrainingOptions copy(Consumer<Editable> edit) {
+    Editable b = new Editable(this);
+    edit.accept(b);
+    return b.build();
+  }
+
+  /** The components as fields, so that each with-method states only what it changes. */
+  private static final class Editable {
+    int order;
+    int maxSuffixLength;
+    int rareWordMaxCount;
+    SuffixWeightRule suffixWeightRule;
+    double suffixWeight;
+    double openClassMinShare;
+    boolean shapeClasses;
+    boolean capitalisationStates;
+    boolean contextEmissions;
+    boolean lowercaseFirstWord;
+    int contextMinCount;
+    int latentRounds;
+    UnknownWordPrior unknownWordPrior;
+    boolean lowerCaseForms;
+    int maxPrefixLength;
+    double minTagShare;
+
+    Editable(TrainingOptions o) {
+      order = o.order;
+      maxSuffixLength = o.maxSuffixLength;
+      rareWordMaxCount = o.rareWordMaxCount;
+      suffixWeightRule = o.suffixWeightRule;
+      suffixWeight = o.suffixWeight;
+      openClassMinShare = o.openClassMinShare;
+      shapeClasses = o.shapeClasses;
+      capitalisationStates = o.capitalisationStates;
+      contextEmissions = o.contextEmissions;
+      lowercaseFirstWord = o.lowercaseFirstWord;
+      contextMinCount = o.contextMinCount;
+      latentRounds = o.latentRounds;
+      unknownWordPrior = o.unknownWordPrior;
+      lowerCaseForms = o.lowerCaseForms;
+      maxPrefixLength = o.maxPrefixLength;
+      minTagShare = o.minTagShare;
+    }
+
+    TrainingOptions build() {
+      return new TrainingOptions(order, maxSuffixLength, rareWordMaxCount, suffixWeightRule, suffixWeight,
+          openClassMinShare, shapeClasses, capitalisationStates, contextEmissions, lowercaseFirstWord, contextMinCount,
+          latentRounds, unknownWordPrior, lowerCaseForms, maxPrefixLength, minTagShare);
+    }
   }
 
   /** The options as provenance entries. */
@@ -153,6 +264,7 @@ public record TrainingOptions(
     Map<String, String> m = new LinkedHashMap<>();
     m.put("option.order", Integer.toString(order));
     m.put("option.maxSuffixLength", Integer.toString(maxSuffixLength));
+    m.put("option.maxPrefixLength", Integer.toString(maxPrefixLength));
     m.put("option.rareWordMaxCount", Integer.toString(rareWordMaxCount));
     m.put("option.suffixWeight", suffixWeightRule == SuffixWeightRule.FIXED
         ? Double.toString(suffixWeight) : suffixWeightRule.name().toLowerCase(Locale.ROOT).replace('_', '-'));
@@ -163,6 +275,8 @@ public record TrainingOptions(
     m.put("option.lowercaseFirstWord", Boolean.toString(lowercaseFirstWord));
     m.put("option.contextMinCount", Integer.toString(contextMinCount));
     m.put("option.latentRounds", Integer.toString(latentRounds));
+    m.put("option.lowerCaseForms", Boolean.toString(lowerCaseForms));
+    m.put("option.unknownWordPrior", unknownWordPrior.name().toLowerCase(Locale.ROOT).replace('_', '-'));
     m.put("option.minTagShare", Double.toString(minTagShare));
     return m;
   }

@@ -77,9 +77,25 @@ public final class AccuracyTables {
     variants.put("+ lower-case lookup of first words", classic.withCues(false, false, true));
     variants.put("+ capitalisation states", classic.withCues(true, false, false));
     variants.put("+ context emissions", classic.withCues(false, true, false));
-    variants.put("all three (default)", TrainingOptions.DEFAULTS);
-    variants.put("all three, first order", TrainingOptions.DEFAULTS.withOrder(1));
-    variants.put("all three + suffix counts per shape class", TrainingOptions.DEFAULTS.withShapeClasses(true));
+    TrainingOptions stateOfLowerCase = TrainingOptions.DEFAULTS.withLowerCaseForms(false).withMaxPrefixLength(0);
+    TrainingOptions allThree = stateOfLowerCase.withUnknownWordPrior(TrainingOptions.UnknownWordPrior.TAG);
+    variants.put("all three (unknown words divided by the tag prior)", allThree);
+    variants.put("all three, first order", allThree.withOrder(1));
+    variants.put("all three + suffix counts per shape class", allThree.withShapeClasses(true));
+    variants.put("all three + state prior of lower-case unknown words", stateOfLowerCase);
+    variants.put("all three + state prior of every unknown word",
+        stateOfLowerCase.withUnknownWordPrior(TrainingOptions.UnknownWordPrior.STATE));
+    variants.put("all three + tag prior over rare words",
+        stateOfLowerCase.withUnknownWordPrior(TrainingOptions.UnknownWordPrior.RARE_TAG));
+    variants.put("all three + state prior over rare words",
+        stateOfLowerCase.withUnknownWordPrior(TrainingOptions.UnknownWordPrior.RARE_STATE));
+    variants.put("all three + lower-case forms of capitalised unknown words", allThree.withLowerCaseForms(true));
+    variants.put("all three + state prior of lower-case words + lower-case forms",
+        TrainingOptions.DEFAULTS.withMaxPrefixLength(0));
+    variants.put("all three + word beginnings", allThree.withMaxPrefixLength(4));
+    variants.put("all three + state prior of lower-case words + lower-case forms + word beginnings (default)",
+        TrainingOptions.DEFAULTS);
+    variants.put("default, first order", TrainingOptions.DEFAULTS.withOrder(1));
     Corpus train = corpus(ewt("train"), TagColumn.UPOS);
     Corpus dev = corpus(ewt("dev"), TagColumn.UPOS);
     Corpus test = corpus(ewt("test"), TagColumn.UPOS);

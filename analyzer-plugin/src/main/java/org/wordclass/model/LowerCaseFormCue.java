@@ -1,0 +1,85 @@
+package org.wordclass.model;
+
+/**
+ * What the lower-case form of an unknown capitalised word says about its tag: "Customer" is
+ * unknown, but "customer" is a known noun, and capitalised words whose lower-case form is mostly
+ * a noun are far more often nouns (and less often proper nouns) than capitalised words in
+ * general. The suffix model's {@code P(t | ending)} of such a word is multiplied by
+ * {@code P(t | capitalised, lower-case form mostly X) / P(t | capitalised)}, both counted over the
+ * rare capitalised training words, X being the most probable tag of the lower-case form (see
+ * {@link LowerCaseForms}). Words whose lower-case form is unknown keep their distribution.
+ *
+ * <p>Holds the per-state priors that pick the lower-case form's tag and the factors, one row of
+ * open-tag factors per tag X; the lookup table is derived from the lexicon. Immutable.
+ */
+public final class LowerCaseFormCue {
+  private final double[] logStatePrior;
+  private final double[] factors;
+  private final int openCount;
+  private final LowerCaseForms forms;
+
+  /**
+   * @param logStatePrior {@code log P(s)} over all training tokens, one per state
+   * @param factors row-major, {@code tagCount} rows of {@code openCount} positive finite factors:
+   *     row X multiplies the distribution of a word whose lower-case form is mostly X
+   * @param lexicon the known words, whose lower-case ones are looked up
+   * @param states the model's states
+   */
+  public LowerCaseFormCue(double[] logStatePrior, double[] factors, int tagCount, int openCount, Lexicon lexicon,
+      StateSpace states) {
+    if (factors.length != (long) tagCount * openCount || states.tagCount() != tagCount) {
+      throw new IllegalArgumentException("lower-case form factors: " + tagCount + " rows of " + openCount + " expected");
+    }
+    for (double f : factors) {
+      if (!(f > 0) || Double.isInfinite(f)) {
+        throw new IllegalArgumentException("lower-case form factors must be positive and finite: " + f);
+      }
+    }
+    this.logStatePrior = logStatePrior.clone();
+    this.factors = factors.clone();
+    this.openCount = openCount;
+    this.forms = new LowerCaseForms(lexicon, states, this.logStatePrior);
+  }
+
+  /**
+   * Multiplies {@code dist} (one entry per open tag) by the factors of the word's lower-case
+   * form, if the word is written with a capital and that form is known.
+   *
+   * @return the tag of the lower-case form that was used, or -1 if none was
+   */
+  public int apply(char[] buf, int off, int len, double[] dist) {
+    if (WordShape.classify(buf, off, len).capitalisationOnly() != WordShape.CAPITALISED) {
+      return -1;
+    }
+    int tag = forms.tagOfLowerCased(buf, off, len);
+    if (tag >= 0) {
+      for (int k = 0, row = tag * openCount; k < openCount; k++) {
+        dist[k] *= factors[row + k];
+      }
+    }
+    return tag;
+  }
+
+  /** The factor of open tag {@code k} for words whose lower-case form is mostly {@code tag}. */
+  public double factor(int tag, int k) {
+    return factors[tag * openCount + k];
+  }
+
+  double[] logStatePrior() {
+    return logStatePrior;
+  }
+
+  double[] factors() {
+    return factors;
+  }
+
+  /** The lower-case words and their tags. */
+  public LowerCaseForms forms() {
+    return forms;
+  }
+
+  /** Approximate heap size in bytes. */
+  public long ramBytesUsed() {
+    return 8L * (logStatePrior.length + factors.length) + forms.ramBytesUsed();
+  }
+}

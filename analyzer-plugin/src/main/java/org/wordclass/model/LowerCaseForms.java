@@ -1,0 +1,138 @@
+package org.wordclass.model;
+
+import java.util.Arrays;
+
+/**
+ * The lower-case words of a lexicon with the most probable tag of each, looked up by a word
+ * written in any case: what "Customer" or "CUSTOMER" most often is as "customer". The most
+ * probable tag of a word is that of its state {@code s} with the highest {@code P(w|s) P(s)},
+ * that is the state it was seen with most often in training.
+ *
+ * <p>Lower-casing is {@link Character#toLowerCase(char)} character by character, done on the fly
+ * while hashing and comparing, so a lookup allocates nothing. An open-addressing hash table over
+ * one array of characters, built once from the lexicon (derived data: a model file does not
+ * store it). Immutable and safe to share between threads.
+ */
+public final class LowerCaseForms {
+  private final char[] chars;
+  private final int[] wordStart;
+  private final int[] tagOf;
+  private final int[] slots;
+  private final int[] slotHash;
+
+  /**
+   * @param lexicon the known words
+   * @param states the states the lexicon's entries list
+   * @param logStatePrior {@code log P(s)} for every state
+   */
+  public LowerCaseForms(Lexicon lexicon, StateSpace states, double[] logStatePrior) {
+    if (logStatePrior.length != states.size()) {
+      throw new IllegalArgumentException("one state prior per state expected, not " + logStatePrior.length);
+    }
+    StringBuilder all = new StringBuilder();
+    int[] starts = new int[lexicon.size() + 1];
+    int[] tags = new int[lexicon.size()];
+    int count = 0;
+    for (int w = 0; w < lexicon.size(); w++) {
+      String word = lexicon.word(w);
+      if (word.isEmpty() || !isLowerCase(word)) {
+        continue;
+      }
+      int best = -1;
+      double bestScore = Double.NEGATIVE_INFINITY;
+      for (int k = 0; k < lexicon.tagCount(w); k++) {
+        int state = lexicon.tag(w, k);
+        double score = lexicon.logEmission(w, k) + logStatePrior[state];
+        if (best < 0 || score > bestScore) {
+          best = state;
+          bestScore = score;
+        }
+      }
+      starts[count] = all.length();
+      tags[count] = states.tagOf(best);
+      all.append(word);
+      count++;
+    }
+    starts[count] = all.length();
+    this.chars = all.toString().toCharArray();
+    this.wordStart = Arrays.copyOf(starts, count + 1);
+    this.tagOf = Arrays.copyOf(tags, count);
+    int capacity = Integer.highestOneBit(Math.max(2, count) * 2) * 2;
+    this.slots = new int[capacity];
+    this.slotHash = new int[capacity];
+    Arrays.fill(slots, -1);
+    for (int i = 0; i < count; i++) {
+      int start = wordStart[i];
+      int len = wordStart[i + 1] - start;
+      int h = hash(chars, start, len);
+      int slot = h & (capacity - 1);
+      while (slots[slot] >= 0) {
+        slot = (slot + 1) & (capacity - 1); // lexicon words are distinct
+      }
+      slots[slot] = i;
+      slotHash[slot] = h;
+    }
+  }
+
+  private static boolean isLowerCase(String w) {
+    for (int i = 0; i < w.length(); i++) {
+      if (Character.toLowerCase(w.charAt(i)) != w.charAt(i)) {
+        return false;
+      }
+    }
+    return true;
+  }
+
+  /**
+   * The most probable tag of the lower-case form of {@code buf[off..off+len)}, or -1 if that
+   * form is not a known word.
+   */
+  public int tagOfLowerCased(char[] buf, int off, int len) {
+    int mask = slots.length - 1;
+    int h = hash(buf, off, len);
+    int slot = h & mask;
+    int word;
+    while ((word = slots[slot]) >= 0) {
+      if (slotHash[slot] == h && equal(word, buf, off, len)) {
+        return tagOf[word];
+      }
+      slot = (slot + 1) & mask;
+    }
+    return -1;
+  }
+
+  /** Number of lower-case words held. */
+  public int size() {
+    return tagOf.length;
+  }
+
+  /** Approximate heap size in bytes. */
+  public long ramBytesUsed() {
+    return 2L * chars.length + 8L * wordStart.length + 8L * slots.length;
+  }
+
+  private boolean equal(int word, char[] buf, int off, int len) {
+    int start = wordStart[word];
+    if (wordStart[word + 1] - start != len) {
+      return false;
+    }
+    for (int i = 0; i < len; i++) {
+      if (chars[start + i] != Character.toLowerCase(buf[off + i])) {
+        return false;
+      }
+    }
+    return true;
+  }
+
+  /** A hash of the lower-cased characters. */
+  private static int hash(char[] buf, int off, int len) {
+    int h = 0x9747b28c;
+    for (int i = off, end = off + len; i < end; i++) {
+      h = 31 * h + Character.toLowerCase(buf[i]);
+    }
+    h ^= h >>> 16;
+    h *= 0x85ebca6b;
+    h ^= h >>> 13;
+    return h;
+  }
+}
