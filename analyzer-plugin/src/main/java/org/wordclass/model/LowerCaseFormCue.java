@@ -15,6 +15,7 @@ package org.wordclass.model;
 public final class LowerCaseFormCue {
   private final double[] logStatePrior;
   private final double[] factors;
+  private final double[] logFactors;
   private final int openCount;
   private final LowerCaseForms forms;
 
@@ -37,6 +38,10 @@ public final class LowerCaseFormCue {
     }
     this.logStatePrior = logStatePrior.clone();
     this.factors = factors.clone();
+    this.logFactors = new double[factors.length];
+    for (int i = 0; i < factors.length; i++) {
+      logFactors[i] = Math.log(factors[i]);
+    }
     this.openCount = openCount;
     this.forms = new LowerCaseForms(lexicon, states, this.logStatePrior);
   }
@@ -48,16 +53,34 @@ public final class LowerCaseFormCue {
    * @return the tag of the lower-case form that was used, or -1 if none was
    */
   public int apply(char[] buf, int off, int len, double[] dist) {
+    int tag = tagOfLowerCaseForm(buf, off, len);
+    for (int k = 0, row = tag * openCount; tag >= 0 && k < openCount; k++) {
+      dist[k] *= factors[row + k];
+    }
+    return tag;
+  }
+
+  /**
+   * As {@link #apply}, in logarithms: adds the logarithms of the factors to {@code logDist}, as
+   * a decoder scoring unknown words does; {@code shape} is the word's, classified once by the
+   * caller.
+   *
+   * @return the tag of the lower-case form that was used, or -1 if none was
+   */
+  public int addLogFactors(WordShape shape, char[] buf, int off, int len, double[] logDist) {
+    int tag = shape.capitalisationOnly() == WordShape.CAPITALISED ? forms.tagOfLowerCased(buf, off, len) : -1;
+    for (int k = 0, row = tag * openCount; tag >= 0 && k < openCount; k++) {
+      logDist[k] += logFactors[row + k];
+    }
+    return tag;
+  }
+
+  /** The most probable tag of the word's lower-case form if it is written with a capital and that form is known, else -1. */
+  private int tagOfLowerCaseForm(char[] buf, int off, int len) {
     if (WordShape.classify(buf, off, len).capitalisationOnly() != WordShape.CAPITALISED) {
       return -1;
     }
-    int tag = forms.tagOfLowerCased(buf, off, len);
-    if (tag >= 0) {
-      for (int k = 0, row = tag * openCount; k < openCount; k++) {
-        dist[k] *= factors[row + k];
-      }
-    }
-    return tag;
+    return forms.tagOfLowerCased(buf, off, len);
   }
 
   /** The factor of open tag {@code k} for words whose lower-case form is mostly {@code tag}. */
@@ -80,6 +103,6 @@ public final class LowerCaseFormCue {
 
   /** Approximate heap size in bytes. */
   public long ramBytesUsed() {
-    return 8L * (logStatePrior.length + factors.length) + forms.ramBytesUsed();
+    return 8L * (logStatePrior.length + 2L * factors.length) + forms.ramBytesUsed();
   }
 }

@@ -30,9 +30,9 @@ import java.util.Arrays;
  *
  * <p>Only open-class tags, those seen with rare words in training, are candidates. Scoring one
  * word costs one trie step per character of its ending and of its beginning, a lookup of its
- * lower-case form if it is capitalised, and one logarithm per open tag. The distribution of an
- * ending and the factors of a beginning depend on nothing but the trie node the word reaches, so
- * they are kept per node, worked out (and allocated, about 100 bytes) by the first word that
+ * lower-case form if it is capitalised, and a sum per open tag. The distribution of an ending
+ * and the factors of a beginning depend on nothing but the trie node the word reaches, so their
+ * logarithms are kept per node, worked out (and allocated, about 100 bytes) by the first word that
  * reaches it: later words read them. Safe to share between threads: the parameters never change,
  * and the kept values are published whole (release store, acquire load); two threads filling the
  * same node compute the same values.
@@ -56,9 +56,9 @@ public final class UnknownWordModel {
    * an unknown word is scored with.
    */
   private final int[][] openOfCount;
-  /** Per trie and node, {@code P(t | ending)} over the open tags once a word has reached it, else null. */
+  /** Per trie and node, {@code log P(t | ending)} over the open tags once a word has reached it, else null. */
   private final double[][][] endingDistribution;
-  /** Per beginning trie and node, {@link #prefixFactor} of each open tag once a word has reached it, else null. */
+  /** Per beginning trie and node, the logarithm of {@link #prefixFactor} of each open tag once a word has reached it, else null. */
   private final double[][][] beginningFactors;
   private static final VarHandle NODE = MethodHandles.arrayElementVarHandle(double[][].class);
 
@@ -241,31 +241,34 @@ public final class UnknownWordModel {
    * @return length of the longest ending that was found in the counts
    */
   public int logEmissions(char[] buf, int off, int len, boolean capitalisedState, double[] scratch, double[] out) {
-    int depth = endingDistribution(buf, off, len, scratch, out);
+    // the product of the cues, summed in logarithms: each cue's logarithms are kept, not the
+    // product's, since the ending and the beginning of a word are kept at different nodes
+    WordShape shape = WordShape.classify(buf, off, len);
+    int depth = logEndingDistribution(shape, buf, off, len, scratch, out);
     if (lowerCaseForms != null) {
-      lowerCaseForms.apply(buf, off, len, out);
+      lowerCaseForms.addLogFactors(shape, buf, off, len, out);
     }
     if (prefixTries != null) {
-      double[] factors = beginningFactors(buf, off, len);
+      double[] logFactors = logBeginningFactors(shape, buf, off, len);
       for (int k = 0; k < openTags.length; k++) {
-        out[k] *= factors[k];
+        out[k] += logFactors[k];
       }
     }
     double[] prior = capitalisedState ? logPriorCapitalised : logPrior;
     for (int i = 0; i < openTags.length; i++) {
-      out[i] = Math.log(out[i]) - prior[openTags[i]];
+      out[i] -= prior[openTags[i]];
     }
     return depth;
   }
 
   /**
-   * Writes {@link #tagDistribution} of the word with θ into {@code out}, read from the node its
-   * longest known ending reaches where a word has reached it before.
+   * Writes the logarithm of {@link #tagDistribution} of the word with θ into {@code out}, read
+   * from the node its longest known ending reaches where a word has reached it before.
    *
    * @return length of that ending
    */
-  private int endingDistribution(char[] buf, int off, int len, double[] scratch, double[] out) {
-    int t = trieOfShape[WordShape.classify(buf, off, len).ordinal()];
+  private int logEndingDistribution(WordShape shape, char[] buf, int off, int len, double[] scratch, double[] out) {
+    int t = trieOfShape[shape.ordinal()];
     SuffixTrie trie = tries[t];
     int node = 0;
     int depth = 0;
@@ -276,6 +279,9 @@ public final class UnknownWordModel {
     if (kept == null) {
       kept = new double[openTags.length];
       tagDistribution(buf, off, len, theta, null, scratch, kept);
+      for (int k = 0; k < kept.length; k++) {
+        kept[k] = Math.log(kept[k]);
+      }
       NODE.setRelease(endingDistribution[t], node, kept);
     }
     System.arraycopy(kept, 0, out, 0, openTags.length);
@@ -283,12 +289,13 @@ public final class UnknownWordModel {
   }
 
   /**
-   * {@link #prefixFactor} of every open tag for the word, kept per node of the beginning trie:
-   * the factor depends only on the deepest node the word's beginning reaches, since abstraction
-   * along the path stops where a node holds no count of an open tag, and so do all nodes below.
+   * The logarithm of {@link #prefixFactor} of every open tag for the word, kept per node of the
+   * beginning trie: the factor depends only on the deepest node the word's beginning reaches,
+   * since abstraction along the path stops where a node holds no count of an open tag, and so
+   * do all nodes below it.
    */
-  private double[] beginningFactors(char[] buf, int off, int len) {
-    int group = WordShape.classify(buf, off, len).capitalisationOnly() == WordShape.CAPITALISED ? 1 : 0;
+  private double[] logBeginningFactors(WordShape shape, char[] buf, int off, int len) {
+    int group = shape.capitalisationOnly() == WordShape.CAPITALISED ? 1 : 0;
     SuffixTrie trie = prefixTries[group];
     int node = 0;
     for (int depth = 0, next; depth < Math.min(len, maxPrefixLength)
@@ -299,7 +306,7 @@ public final class UnknownWordModel {
     if (kept == null) {
       kept = new double[openTags.length];
       for (int k = 0; k < kept.length; k++) {
-        kept[k] = prefixFactor(buf, off, len, k);
+        kept[k] = Math.log(prefixFactor(buf, off, len, k));
       }
       NODE.setRelease(beginningFactors[group], node, kept);
     }
