@@ -70,7 +70,7 @@ public record TrainingOptions(
   /** The classic second-order model with a suffix model and none of the later cues. */
   public static final TrainingOptions CLASSIC =
       DEFAULTS.withCues(false, false, false).withUnknownWordPrior(UnknownWordPrior.TAG).withLowerCaseForms(false)
-          .withMaxPrefixLength(0);
+          .withMaxPrefixLength(0).withMinTagShare(0);
 
   /** How θ of the suffix model is chosen. */
   public enum SuffixWeightRule {

@@ -77,7 +77,9 @@ public final class AccuracyTables {
     variants.put("+ lower-case lookup of first words", classic.withCues(false, false, true));
     variants.put("+ capitalisation states", classic.withCues(true, false, false));
     variants.put("+ context emissions", classic.withCues(false, true, false));
-    TrainingOptions stateOfLowerCase = TrainingOptions.DEFAULTS.withLowerCaseForms(false).withMaxPrefixLength(0);
+    // every addition before the lexicon's minimum tag share is measured without it
+    TrainingOptions allCues = TrainingOptions.DEFAULTS.withMinTagShare(0);
+    TrainingOptions stateOfLowerCase = allCues.withLowerCaseForms(false).withMaxPrefixLength(0);
     TrainingOptions allThree = stateOfLowerCase.withUnknownWordPrior(TrainingOptions.UnknownWordPrior.TAG);
     variants.put("all three (unknown words divided by the tag prior)", allThree);
     variants.put("all three, first order", allThree.withOrder(1));
@@ -90,11 +92,10 @@ public final class AccuracyTables {
     variants.put("all three + state prior over rare words",
         stateOfLowerCase.withUnknownWordPrior(TrainingOptions.UnknownWordPrior.RARE_STATE));
     variants.put("all three + lower-case forms of capitalised unknown words", allThree.withLowerCaseForms(true));
-    variants.put("all three + state prior of lower-case words + lower-case forms",
-        TrainingOptions.DEFAULTS.withMaxPrefixLength(0));
+    variants.put("all three + state prior of lower-case words + lower-case forms", allCues.withMaxPrefixLength(0));
     variants.put("all three + word beginnings", allThree.withMaxPrefixLength(4));
-    variants.put("all three + state prior of lower-case words + lower-case forms + word beginnings (default)",
-        TrainingOptions.DEFAULTS);
+    variants.put("all three + state prior of lower-case words + lower-case forms + word beginnings", allCues);
+    variants.put("the same + minimum tag share 0.002 in the lexicon (default)", TrainingOptions.DEFAULTS);
     variants.put("default, first order", TrainingOptions.DEFAULTS.withOrder(1));
     Corpus train = corpus(ewt("train"), TagColumn.UPOS);
     Corpus dev = corpus(ewt("dev"), TagColumn.UPOS);
