@@ -246,6 +246,20 @@ public final class Lexicon {
     return wordStart.length - 1;
   }
 
+  /**
+   * The characters of all words, word w from {@code wordStarts()[w]} to {@code wordStarts()[w +
+   * 1]}: for the classes of this package that index the words without copying them. Not to be
+   * modified.
+   */
+  char[] allChars() {
+    return chars;
+  }
+
+  /** Where each word starts in {@link #allChars}, and one more entry for the end. Not to be modified. */
+  int[] wordStarts() {
+    return wordStart;
+  }
+
   public String word(int word) {
     return new String(chars, wordStart[word], wordStart[word + 1] - wordStart[word]);
   }

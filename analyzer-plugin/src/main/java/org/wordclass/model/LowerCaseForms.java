@@ -10,12 +10,15 @@ import java.util.Arrays;
  *
  * <p>Lower-casing is {@link Character#toLowerCase(char)} character by character, done on the fly
  * while hashing and comparing, so a lookup allocates nothing. An open-addressing hash table over
- * one array of characters, built once from the lexicon (derived data: a model file does not
- * store it). Immutable and safe to share between threads.
+ * the lexicon's own characters, built once from the lexicon when a model is loaded (derived data:
+ * a model file does not store it). Immutable and safe to share between threads.
  */
 public final class LowerCaseForms {
+  /** The lexicon's own characters and word starts, shared rather than copied. */
   private final char[] chars;
-  private final int[] wordStart;
+  private final int[] lexiconStart;
+  /** Per held word: its id in the lexicon and its most probable tag. */
+  private final int[] wordOf;
   private final int[] tagOf;
   private final int[] slots;
   private final int[] slotHash;
@@ -29,13 +32,13 @@ public final class LowerCaseForms {
     if (logStatePrior.length != states.size()) {
       throw new IllegalArgumentException("one state prior per state expected, not " + logStatePrior.length);
     }
-    StringBuilder all = new StringBuilder();
-    int[] starts = new int[lexicon.size() + 1];
+    this.chars = lexicon.allChars();
+    this.lexiconStart = lexicon.wordStarts();
+    int[] words = new int[lexicon.size()];
     int[] tags = new int[lexicon.size()];
     int count = 0;
     for (int w = 0; w < lexicon.size(); w++) {
-      String word = lexicon.word(w);
-      if (word.isEmpty() || !isLowerCase(word)) {
+      if (lexiconStart[w + 1] == lexiconStart[w] || !isLowerCase(lexiconStart[w], lexiconStart[w + 1])) {
         continue;
       }
       int best = -1;
@@ -48,23 +51,19 @@ public final class LowerCaseForms {
           bestScore = score;
         }
       }
-      starts[count] = all.length();
+      words[count] = w;
       tags[count] = states.tagOf(best);
-      all.append(word);
       count++;
     }
-    starts[count] = all.length();
-    this.chars = all.toString().toCharArray();
-    this.wordStart = Arrays.copyOf(starts, count + 1);
+    this.wordOf = Arrays.copyOf(words, count);
     this.tagOf = Arrays.copyOf(tags, count);
     int capacity = Integer.highestOneBit(Math.max(2, count) * 2) * 2;
     this.slots = new int[capacity];
     this.slotHash = new int[capacity];
     Arrays.fill(slots, -1);
     for (int i = 0; i < count; i++) {
-      int start = wordStart[i];
-      int len = wordStart[i + 1] - start;
-      int h = hash(chars, start, len);
+      int start = lexiconStart[wordOf[i]];
+      int h = hash(chars, start, lexiconStart[wordOf[i] + 1] - start);
       int slot = h & (capacity - 1);
       while (slots[slot] >= 0) {
         slot = (slot + 1) & (capacity - 1); // lexicon words are distinct
@@ -74,9 +73,9 @@ public final class LowerCaseForms {
     }
   }
 
-  private static boolean isLowerCase(String w) {
-    for (int i = 0; i < w.length(); i++) {
-      if (Character.toLowerCase(w.charAt(i)) != w.charAt(i)) {
+  private boolean isLowerCase(int from, int to) {
+    for (int i = from; i < to; i++) {
+      if (Character.toLowerCase(chars[i]) != chars[i]) {
         return false;
       }
     }
@@ -108,12 +107,12 @@ public final class LowerCaseForms {
 
   /** Approximate heap size in bytes. */
   public long ramBytesUsed() {
-    return 2L * chars.length + 8L * wordStart.length + 8L * slots.length;
+    return 8L * (wordOf.length + slots.length);
   }
 
-  private boolean equal(int word, char[] buf, int off, int len) {
-    int start = wordStart[word];
-    if (wordStart[word + 1] - start != len) {
+  private boolean equal(int held, char[] buf, int off, int len) {
+    int start = lexiconStart[wordOf[held]];
+    if (lexiconStart[wordOf[held] + 1] - start != len) {
       return false;
     }
     for (int i = 0; i < len; i++) {

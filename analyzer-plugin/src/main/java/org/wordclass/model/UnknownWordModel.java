@@ -181,23 +181,38 @@ public final class UnknownWordModel {
     this.lowerCaseForms = lowerCaseForms;
     this.maxPrefixLength = maxPrefixLength;
     this.prefixTries = maxPrefixLength > 0 ? prefixTries.clone() : null;
+    int[] openOfTag = openIndexOfTags(this.openTags, logPrior.length);
     this.openOfPrefixCount = maxPrefixLength > 0 ? new int[2][] : null;
     for (int t = 0; maxPrefixLength > 0 && t < 2; t++) {
-      openOfPrefixCount[t] = new int[prefixTries[t].countTag.length];
-      for (int i = 0; i < openOfPrefixCount[t].length; i++) {
-        openOfPrefixCount[t][i] = Math.max(-1, Arrays.binarySearch(this.openTags, prefixTries[t].countTag[i]));
-      }
+      openOfPrefixCount[t] = openIndexes(prefixTries[t], openOfTag);
     }
     this.tries = tries.clone();
     this.openOfCount = new int[tries.length][];
     for (int t = 0; t < tries.length; t++) {
-      openOfCount[t] = new int[tries[t].countTag.length];
-      for (int i = 0; i < openOfCount[t].length; i++) {
-        openOfCount[t][i] = Math.max(-1, Arrays.binarySearch(this.openTags, tries[t].countTag[i]));
-      }
+      openOfCount[t] = openIndexes(tries[t], openOfTag);
     }
     this.endingDistribution = perNode(this.tries);
     this.beginningFactors = maxPrefixLength > 0 ? perNode(this.prefixTries) : null;
+  }
+
+  /** Per tag of the tag set, its index among the open tags, or -1. */
+  private static int[] openIndexOfTags(int[] openTags, int tagCount) {
+    int[] open = new int[tagCount];
+    Arrays.fill(open, -1);
+    for (int k = 0; k < openTags.length; k++) {
+      open[openTags[k]] = k;
+    }
+    return open;
+  }
+
+  /** Per count entry of {@code trie}: the open index of its tag, or -1 for a closed tag (or one outside the tag set). */
+  private static int[] openIndexes(SuffixTrie trie, int[] openOfTag) {
+    int[] open = new int[trie.countTag.length];
+    for (int i = 0; i < open.length; i++) {
+      int tag = trie.countTag[i];
+      open[i] = tag >= 0 && tag < openOfTag.length ? openOfTag[tag] : -1;
+    }
+    return open;
   }
 
   private static double[][][] perNode(SuffixTrie[] tries) {
