@@ -65,9 +65,10 @@ import org.wordclass.model.TagSet;
  *
  * Viterbi costs O(K<sup>2</sup>) per token at order 1 and O(K<sup>3</sup>) at order 2, for K
  * candidate classes (one or two for most known words, all open classes for unknown words). With
- * the bundled English model on web text the decoder takes roughly 0.25 microseconds per token at
- * order 1 and 0.4 at order 2; confidence (a forward-backward pass) about doubles it (figures and
- * method in docs/performance.md). Memory is bounded
+ * the bundled English model on web text the decoder takes roughly 0.2 microseconds per token at
+ * order 1 and 0.3 at order 2, and the whole filter about 0.4 at order 2: several times what
+ * Lucene's standard tokenizer and lower-casing cost together; confidence (a forward-backward
+ * pass) about doubles the decoding (figures and method in docs/performance.md). Memory is bounded
  * by the window: one pooled copy of the token's attributes per buffered token, kept for the life
  * of the filter, plus the decoder's buffers, a few kilobytes per token of the window at most.
  * Steady-state filtering allocates nothing per token, unless upstream payloads must be copied.
