@@ -10,14 +10,22 @@ package org.wordclass.model;
  * {@link LowerCaseForms}). Words whose lower-case form is unknown keep their distribution.
  *
  * <p>Holds the per-state priors that pick the lower-case form's tag and the factors, one row of
- * open-tag factors per tag X; the lookup table is derived from the lexicon. Immutable.
+ * open-tag factors per tag X; the lookup table is derived from the lexicon on first use. Safe to
+ * share between threads.
  */
 public final class LowerCaseFormCue {
   private final double[] logStatePrior;
   private final double[] factors;
   private final double[] logFactors;
   private final int openCount;
-  private final LowerCaseForms forms;
+  private final Lexicon lexicon;
+  private final StateSpace states;
+  /**
+   * Built from the lexicon on first use rather than when the model is loaded: it is derived data
+   * that takes a tenth of a cold load, and many documents never contain an unknown capitalised
+   * word. Threads racing to build it build equal tables; the volatile field publishes one whole.
+   */
+  private volatile LowerCaseForms forms;
 
   /**
    * @param logStatePrior {@code log P(s)} over all training tokens, one per state
@@ -43,7 +51,12 @@ public final class LowerCaseFormCue {
       logFactors[i] = Math.log(factors[i]);
     }
     this.openCount = openCount;
-    this.forms = new LowerCaseForms(lexicon, states, this.logStatePrior);
+    if (logStatePrior.length != states.size()) {
+      // checked here, when the model is read, although the table that uses them is built later
+      throw new IllegalArgumentException("one state prior per state expected, not " + logStatePrior.length);
+    }
+    this.lexicon = lexicon;
+    this.states = states;
   }
 
   /**
@@ -68,7 +81,7 @@ public final class LowerCaseFormCue {
    * @return the tag of the lower-case form that was used, or -1 if none was
    */
   public int addLogFactors(WordShape shape, char[] buf, int off, int len, double[] logDist) {
-    int tag = shape.capitalisationOnly() == WordShape.CAPITALISED ? forms.tagOfLowerCased(buf, off, len) : -1;
+    int tag = shape.capitalisationOnly() == WordShape.CAPITALISED ? forms().tagOfLowerCased(buf, off, len) : -1;
     for (int k = 0, row = tag * openCount; tag >= 0 && k < openCount; k++) {
       logDist[k] += logFactors[row + k];
     }
@@ -80,7 +93,7 @@ public final class LowerCaseFormCue {
     if (WordShape.classify(buf, off, len).capitalisationOnly() != WordShape.CAPITALISED) {
       return -1;
     }
-    return forms.tagOfLowerCased(buf, off, len);
+    return forms().tagOfLowerCased(buf, off, len);
   }
 
   /** The factor of open tag {@code k} for words whose lower-case form is mostly {@code tag}. */
@@ -98,11 +111,16 @@ public final class LowerCaseFormCue {
 
   /** The lower-case words and their tags. */
   public LowerCaseForms forms() {
-    return forms;
+    LowerCaseForms built = forms;
+    if (built == null) {
+      built = new LowerCaseForms(lexicon, states, logStatePrior);
+      forms = built;
+    }
+    return built;
   }
 
   /** Approximate heap size in bytes. */
   public long ramBytesUsed() {
-    return 8L * (logStatePrior.length + 2L * factors.length) + forms.ramBytesUsed();
+    return 8L * (logStatePrior.length + 2L * factors.length) + forms().ramBytesUsed();
   }
 }
