@@ -3,11 +3,13 @@ package org.wordclass.analysis;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 
 import java.io.IOException;
+import java.io.InputStream;
 import java.io.UncheckedIOException;
 import java.util.ArrayList;
 import java.util.Collections;
 import java.util.List;
 import java.util.Random;
+import java.util.concurrent.CountDownLatch;
 import java.util.concurrent.ExecutorService;
 import java.util.concurrent.Executors;
 import java.util.concurrent.Future;
@@ -18,6 +20,8 @@ import org.apache.lucene.analysis.standard.StandardTokenizer;
 import org.apache.lucene.analysis.tokenattributes.CharTermAttribute;
 import org.junit.jupiter.api.Test;
 import org.wordclass.model.DefaultModel;
+import org.wordclass.model.HmmModel;
+import org.wordclass.model.ModelFile;
 
 /**
  * Eight threads share one model and one analyzer (each thread gets its own token stream from
@@ -86,14 +90,67 @@ class ConcurrentTaggingTest {
     }
   }
 
+  /**
+   * The model keeps an unknown word's scores per node of its suffix and beginning tries, filled
+   * by the first word to reach a node, and builds its table of lower-case forms on first use:
+   * eight threads starting together on a freshly loaded model, on texts of invented words (every
+   * one unknown, with many different endings, beginnings and capitals), race to fill them, and
+   * must still get the tags a single thread gets from another fresh copy.
+   */
+  @Test
+  void threadsRacingToFillAFreshModelGetTheTagsOfOne() throws Exception {
+    List<String> texts = inventedTexts();
+    List<String> expected = new ArrayList<>();
+    try (Analyzer single = analyzer(WordClassOptions.of(freshBundledModel()))) {
+      texts.forEach(t -> expected.add(tags(single, t)));
+    }
+    for (int round = 0; round < 3; round++) {
+      try (Analyzer shared = analyzer(WordClassOptions.of(freshBundledModel()))) {
+        assertEachThreadAgrees(shared, texts, expected);
+      }
+    }
+  }
+
+  private static HmmModel freshBundledModel() throws IOException {
+    try (InputStream in = DefaultModel.class.getClassLoader().getResourceAsStream(DefaultModel.RESOURCE)) {
+      return ModelFile.read(in, DefaultModel.RESOURCE);
+    }
+  }
+
+  /** Sentences of pronounceable invented words, some capitalised, some known words between them. */
+  private static List<String> inventedTexts() {
+    Random rnd = new Random(20261202L);
+    String[] onsets = {"br", "qu", "st", "gl", "m", "t", "sk", "fr", "pl", "v"};
+    String[] vowels = {"a", "e", "i", "o", "u", "ai", "ou"};
+    String[] endings = {"ness", "ing", "ed", "ly", "ish", "ment", "s", "er", "ous", "ation", "ize", "", "x"};
+    String[] known = {"the", "ferry", "will", "board", "at", "noon", "and", "Customer", "Harbour"};
+    List<String> texts = new ArrayList<>();
+    for (int i = 0; i < 100; i++) {
+      StringBuilder s = new StringBuilder();
+      for (int w = 1 + rnd.nextInt(30); w > 0; w--) {
+        String word = rnd.nextInt(4) == 0 ? known[rnd.nextInt(known.length)]
+            : onsets[rnd.nextInt(onsets.length)] + vowels[rnd.nextInt(vowels.length)]
+                + onsets[rnd.nextInt(onsets.length)] + endings[rnd.nextInt(endings.length)];
+        s.append(rnd.nextInt(5) == 0 ? Character.toUpperCase(word.charAt(0)) + word.substring(1) : word).append(' ');
+      }
+      texts.add(s.toString());
+    }
+    return texts;
+  }
+
   private static void assertEachThreadAgrees(Analyzer shared, List<String> texts, List<String> expected) throws Exception {
     ExecutorService pool = Executors.newFixedThreadPool(THREADS);
+    CountDownLatch start = new CountDownLatch(1);
     try {
       List<Future<List<String>>> results = new ArrayList<>();
       for (int t = 0; t < THREADS; t++) {
         long seed = t;
-        results.add(pool.submit(() -> tagInRandomOrder(shared, texts, new Random(seed))));
+        results.add(pool.submit(() -> {
+          start.await();
+          return tagInRandomOrder(shared, texts, new Random(seed));
+        }));
       }
+      start.countDown();
       for (Future<List<String>> result : results) {
         assertEquals(expected, result.get());
       }
