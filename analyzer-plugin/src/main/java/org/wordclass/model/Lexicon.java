@@ -169,7 +169,7 @@ public final class Lexicon {
 
   private static int tableSize(int words) {
     int size = 16;
-    while (size < words * 2L) {
+    while (size < words * 4L / 3) {
       size <<= 1;
     }
     return size;
