@@ -12,8 +12,9 @@ import java.util.List;
  * <p>Words live in one {@code char[]} and are found through an open-addressing hash table that
  * is probed straight from a token's char buffer, so a lookup builds no String and allocates
  * nothing. Memory: about 2 bytes per character, 20 to 30 bytes per word (the hash table is kept
- * between three-quarters and three-eighths full), 10 bytes per word/tag pair, and 4 bytes per
- * state for each pair with context emissions (one row of {@link #contextLogEmissionInRow}). Words put in by a {@link UserLexicon} are marked ({@link #isUserListed}), so that decoding
+ * between three-eighths and three-quarters full), 10 bytes per word/tag pair, and 4 bytes per
+ * state for each pair with context emissions (one row of {@link #contextLogEmissionInRow}).
+ * Words put in by a {@link UserLexicon} are marked ({@link #isUserListed}), so that decoding
  * can say a token's classes were fixed by the user. Immutable and safe to share between threads.
  */
 public final class Lexicon {
