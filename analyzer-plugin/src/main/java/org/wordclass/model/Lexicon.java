@@ -84,61 +84,147 @@ public final class Lexicon {
    * {@code userListed} may be null for none.
    */
   public Lexicon(List<Entry> entries, boolean[] userListed) {
-    if (userListed != null && userListed.length != entries.size()) {
+    this(builderOf(entries), userListed);
+  }
+
+  private static Builder builderOf(List<Entry> entries) {
+    Builder builder = new Builder(entries.size());
+    for (Entry e : entries) {
+      builder.startWord(e.word(), e.hasContexts());
+      for (int k = 0; k < e.tags().length; k++) {
+        builder.addState(e.tags()[k], e.logEmissions()[k]);
+        for (int j = 0; e.hasContexts() && j < e.contextStates()[k].length; j++) {
+          builder.addContext(e.contextStates()[k][j], e.contextLogEmissions()[k][j]);
+        }
+      }
+    }
+    return builder;
+  }
+
+  /**
+   * Collects a lexicon word by word straight into the flat arrays it is made of, without an
+   * object per word: what reading a model file uses, since a cold load would otherwise spend a
+   * good part of its time allocating and copying entries. Words must be distinct; each needs
+   * one or more states.
+   */
+  public static final class Builder {
+    private char[] chars;
+    private int charCount;
+    private int[] wordStart;
+    private boolean[] hasContexts;
+    private int words;
+    private int[] tagStart;
+    private short[] tagIds;
+    private float[] logEmissions;
+    private int[] contextStart;
+    private int tags;
+    private short[] contextState;
+    private float[] contextLogEmission;
+    private int contexts;
+    private String lastWord;
+
+    public Builder(int expectedWords) {
+      int n = Math.max(16, expectedWords);
+      chars = new char[8 * n];
+      wordStart = new int[n + 1];
+      tagStart = new int[n + 1];
+      hasContexts = new boolean[n];
+      tagIds = new short[2 * n];
+      logEmissions = new float[2 * n];
+      contextStart = new int[2 * n + 1];
+      contextState = new short[n];
+      contextLogEmission = new float[n];
+    }
+
+    /** Begins the next word; its states follow. */
+    public void startWord(String word, boolean withContexts) {
+      finishWord();
+      if (words + 1 >= wordStart.length) {
+        int grown = 2 * wordStart.length;
+        wordStart = Arrays.copyOf(wordStart, grown);
+        tagStart = Arrays.copyOf(tagStart, grown);
+        hasContexts = Arrays.copyOf(hasContexts, grown);
+      }
+      if (charCount + word.length() > chars.length) {
+        chars = Arrays.copyOf(chars, Math.max(charCount + word.length(), 2 * chars.length));
+      }
+      word.getChars(0, word.length(), chars, charCount);
+      wordStart[words] = charCount;
+      charCount += word.length();
+      tagStart[words] = tags;
+      hasContexts[words] = withContexts;
+      words++;
+      lastWord = word;
+    }
+
+    /** Adds a state of the current word with its emission log-probability. */
+    public void addState(int state, float logEmission) {
+      if (words == 0) {
+        throw new IllegalStateException("a state before any word");
+      }
+      if (tags + 1 >= contextStart.length) {
+        int grown = 2 * contextStart.length;
+        tagIds = Arrays.copyOf(tagIds, grown);
+        logEmissions = Arrays.copyOf(logEmissions, grown);
+        contextStart = Arrays.copyOf(contextStart, grown);
+      }
+      tagIds[tags] = (short) state;
+      logEmissions[tags] = logEmission;
+      contextStart[tags] = contexts;
+      tags++;
+    }
+
+    /** Adds an emission of the current word's last state after the previous state {@code previous}. */
+    public void addContext(int previous, float logEmission) {
+      if (tags == 0 || !hasContexts[words - 1] || tagStart[words - 1] == tags) {
+        throw new IllegalArgumentException("word '" + lastWord + "' has context emissions for some of its states only");
+      }
+      if (contexts == contextState.length) {
+        contextState = Arrays.copyOf(contextState, 2 * contextState.length);
+        contextLogEmission = Arrays.copyOf(contextLogEmission, 2 * contextLogEmission.length);
+      }
+      contextState[contexts] = (short) previous;
+      contextLogEmission[contexts] = logEmission;
+      contexts++;
+    }
+
+    /** The lexicon of the words added. */
+    public Lexicon build() {
+      return new Lexicon(this, null);
+    }
+
+    private void finishWord() {
+      if (words > 0 && tagStart[words - 1] == tags) {
+        throw new IllegalArgumentException("word '" + lastWord + "' needs one or more tags with one emission each");
+      }
+    }
+  }
+
+  private Lexicon(Builder b, boolean[] userListed) {
+    b.finishWord();
+    int words = b.words;
+    if (userListed != null && userListed.length != words) {
       throw new IllegalArgumentException("one user-listed flag per entry expected");
     }
     this.userListed = userListed == null ? null : userListed.clone();
-    int words = entries.size();
-    wordStart = new int[words + 1];
-    tagStart = new int[words + 1];
-    int totalChars = 0;
-    int totalTags = 0;
-    int totalContexts = 0;
-    for (Entry e : entries) {
-      totalChars += e.word().length();
-      totalTags += e.tags().length;
-      for (int[] c : e.contextStates()) {
-        totalContexts += c.length;
-      }
-    }
-    contextStart = new int[totalTags + 1];
-    contextState = new short[totalContexts];
-    contextLogEmission = new float[totalContexts];
-    hasContexts = new boolean[words];
-    chars = new char[totalChars];
-    tagIds = new short[totalTags];
-    logEmissions = new float[totalTags];
+    chars = Arrays.copyOf(b.chars, b.charCount);
+    wordStart = Arrays.copyOf(b.wordStart, words + 1);
+    wordStart[words] = b.charCount;
+    tagStart = Arrays.copyOf(b.tagStart, words + 1);
+    tagStart[words] = b.tags;
+    hasContexts = Arrays.copyOf(b.hasContexts, words);
+    tagIds = Arrays.copyOf(b.tagIds, b.tags);
+    logEmissions = Arrays.copyOf(b.logEmissions, b.tags);
+    contextStart = Arrays.copyOf(b.contextStart, b.tags + 1);
+    contextState = Arrays.copyOf(b.contextState, b.contexts);
+    contextLogEmission = Arrays.copyOf(b.contextLogEmission, b.contexts);
     slots = new long[tableSize(words)];
-    int c = 0;
-    int t = 0;
-    int x = 0;
     for (int w = 0; w < words; w++) {
-      Entry e = entries.get(w);
-      wordStart[w] = c;
-      e.word().getChars(0, e.word().length(), chars, c);
-      c += e.word().length();
-      tagStart[w] = t;
-      hasContexts[w] = e.hasContexts();
-      for (int k = 0; k < e.tags().length; k++) {
-        tagIds[t] = (short) e.tags()[k];
-        logEmissions[t] = e.logEmissions()[k];
-        contextStart[t] = x;
-        if (e.hasContexts()) {
-          for (int j = 0; j < e.contextStates()[k].length; j++) {
-            contextState[x] = (short) e.contextStates()[k][j];
-            contextLogEmission[x] = e.contextLogEmissions()[k][j];
-            x++;
-          }
-        }
-        t++;
-      }
-      wordStart[w + 1] = c;
-      tagStart[w + 1] = t;
       insert(w);
     }
-    contextStart[t] = x;
+    contextStart[b.tags] = b.contexts;
     contextWidth = maxContextState() + 1;
-    contextRow = new int[totalTags];
+    contextRow = new int[b.tags];
     denseContext = new float[denseRows() * contextWidth];
     fillDenseContexts();
   }

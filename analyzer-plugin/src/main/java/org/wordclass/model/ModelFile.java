@@ -355,31 +355,23 @@ public final class ModelFile {
 
   private static Lexicon readLexicon(DataInput in, Limits limits, int stateCount) throws IOException {
     int words = limits.count(in.readVInt(), 4, "lexicon words");
-    List<Lexicon.Entry> entries = new ArrayList<>(words);
+    Lexicon.Builder lexicon = new Lexicon.Builder(words);
     for (int w = 0; w < words; w++) {
       String word = limits.string();
       int n = limits.count(in.readVInt(), 5, "states of a word");
       boolean contexts = in.readByte() != 0;
-      int[] wordStates = new int[n];
-      float[] emissions = new float[n];
-      int[][] contextStates = new int[contexts ? n : 0][];
-      float[][] contextEmissions = new float[contexts ? n : 0][];
+      lexicon.startWord(word, contexts);
       for (int k = 0; k < n; k++) {
-        wordStates[k] = tagIndex(in.readVInt(), stateCount);
-        emissions[k] = Float.intBitsToFloat(in.readInt());
+        lexicon.addState(tagIndex(in.readVInt(), stateCount), Float.intBitsToFloat(in.readInt()));
         if (contexts) {
           int m = limits.count(in.readVInt(), 5, "contexts of a word");
-          contextStates[k] = new int[m];
-          contextEmissions[k] = new float[m];
           for (int j = 0; j < m; j++) {
-            contextStates[k][j] = tagIndex(in.readVInt(), stateCount + 1);
-            contextEmissions[k][j] = Float.intBitsToFloat(in.readInt());
+            lexicon.addContext(tagIndex(in.readVInt(), stateCount + 1), Float.intBitsToFloat(in.readInt()));
           }
         }
       }
-      entries.add(new Lexicon.Entry(word, wordStates, emissions, contextStates, contextEmissions));
     }
-    return new Lexicon(entries);
+    return lexicon.build();
   }
 
   private static UnknownWordModel readUnknownWords(DataInput in, Limits limits, int tagCount, int version,
