@@ -3,6 +3,7 @@ package org.wordclass.adaptation;
 import java.util.LinkedHashMap;
 import java.util.Locale;
 import java.util.Map;
+import java.util.function.Consumer;
 import org.wordclass.training.Transitions;
 
 /**
@@ -93,33 +94,69 @@ public record AdaptationOptions(
   }
 
   public AdaptationOptions withIterations(int max, double minGain) {
-    return new AdaptationOptions(max, minGain, newWeight, lexiconConstraint, relaxedFloor, addWordsMinCount,
-        newPairMinShare, smoothing, threads, batchSentences);
+    return copy(e -> {
+      e.maxIterations = max;
+      e.minRelativeGain = minGain;
+    });
   }
 
   public AdaptationOptions withNewWeight(double weight) {
-    return new AdaptationOptions(maxIterations, minRelativeGain, weight, lexiconConstraint, relaxedFloor,
-        addWordsMinCount, newPairMinShare, smoothing, threads, batchSentences);
+    return copy(e -> e.newWeight = weight);
   }
 
   public AdaptationOptions withLexiconConstraint(boolean constraint) {
-    return new AdaptationOptions(maxIterations, minRelativeGain, newWeight, constraint, relaxedFloor,
-        addWordsMinCount, newPairMinShare, smoothing, threads, batchSentences);
+    return copy(e -> e.lexiconConstraint = constraint);
   }
 
   public AdaptationOptions withAddedWords(int minCount) {
-    return new AdaptationOptions(maxIterations, minRelativeGain, newWeight, lexiconConstraint, relaxedFloor,
-        minCount, newPairMinShare, smoothing, threads, batchSentences);
+    return copy(e -> e.addWordsMinCount = minCount);
   }
 
   public AdaptationOptions withSmoothing(Transitions.Smoothing newSmoothing) {
-    return new AdaptationOptions(maxIterations, minRelativeGain, newWeight, lexiconConstraint, relaxedFloor,
-        addWordsMinCount, newPairMinShare, newSmoothing, threads, batchSentences);
+    return copy(e -> e.smoothing = newSmoothing);
   }
 
   public AdaptationOptions withThreads(int count) {
-    return new AdaptationOptions(maxIterations, minRelativeGain, newWeight, lexiconConstraint, relaxedFloor,
-        addWordsMinCount, newPairMinShare, smoothing, count, batchSentences);
+    return copy(e -> e.threads = count);
+  }
+
+  /** These options with the changes {@code edit} makes, checked like any others. */
+  private AdaptationOptions copy(Consumer<Editable> edit) {
+    Editable e = new Editable(this);
+    edit.accept(e);
+    return e.build();
+  }
+
+  /** The components as fields, so that each with-method states only what it changes. */
+  private static final class Editable {
+    int maxIterations;
+    double minRelativeGain;
+    double newWeight;
+    boolean lexiconConstraint;
+    double relaxedFloor;
+    int addWordsMinCount;
+    double newPairMinShare;
+    Transitions.Smoothing smoothing;
+    int threads;
+    int batchSentences;
+
+    Editable(AdaptationOptions o) {
+      maxIterations = o.maxIterations;
+      minRelativeGain = o.minRelativeGain;
+      newWeight = o.newWeight;
+      lexiconConstraint = o.lexiconConstraint;
+      relaxedFloor = o.relaxedFloor;
+      addWordsMinCount = o.addWordsMinCount;
+      newPairMinShare = o.newPairMinShare;
+      smoothing = o.smoothing;
+      threads = o.threads;
+      batchSentences = o.batchSentences;
+    }
+
+    AdaptationOptions build() {
+      return new AdaptationOptions(maxIterations, minRelativeGain, newWeight, lexiconConstraint, relaxedFloor,
+          addWordsMinCount, newPairMinShare, smoothing, threads, batchSentences);
+    }
   }
 
   /** The options as provenance entries. */
