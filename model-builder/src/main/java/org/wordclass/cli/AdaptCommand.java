@@ -1,5 +1,6 @@
 package org.wordclass.cli;
 
+import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
 import java.util.Locale;
@@ -105,6 +106,7 @@ final class AdaptCommand extends BaseCommand {
     out().printf(Locale.ROOT, "kept iteration %d of %d (%s); model %s%n", result.keptIteration(),
         result.iterations().size() - 1, result.stop().name().toLowerCase(Locale.ROOT).replace('_', ' '), out);
     out().flush();
+    warnIfTooBigForConfigStores(out, Files.size(out));
     return OK;
   }
 

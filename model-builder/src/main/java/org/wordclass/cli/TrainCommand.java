@@ -56,6 +56,7 @@ final class TrainCommand extends BaseCommand {
     HmmModel model = lexicon.applyTo(new HmmEstimator(options).estimate(counts, provenance));
     ModelFile.write(model, out);
     printSummary(counts, model, progress.seconds());
+    warnIfTooBigForConfigStores(out, Files.size(out));
     return OK;
   }
 
