@@ -7,27 +7,29 @@ import java.util.Map;
 import java.util.Set;
 import java.util.TreeSet;
 import org.apache.solr.SolrTestCaseJ4;
+import org.apache.solr.client.solrj.SolrClient;
 import org.apache.solr.client.solrj.SolrRequest;
 import org.apache.solr.client.solrj.SolrServerException;
 import org.apache.solr.client.solrj.request.GenericSolrRequest;
+import org.apache.solr.client.solrj.response.QueryResponse;
 import org.apache.solr.common.SolrDocument;
 import org.apache.solr.common.SolrException;
 import org.apache.solr.common.SolrInputDocument;
 import org.apache.solr.common.params.ModifiableSolrParams;
 import org.apache.solr.common.util.NamedList;
-import org.junit.AfterClass;
-import org.junit.BeforeClass;
 import org.junit.Test;
 
 /**
- * The demo config set in a real Solr core: a community cookbook's notes, searched by the word
- * class of "book" (to book a hall, a recipe book) with standard Solr query syntax only, and the
- * analysis screen showing each token's class and confidence; and the config set's user lexicon
- * correcting the model where the cookbook's words mean something else.
+ * The demo config set searched as a user would: a community cookbook's notes, searched by the
+ * word class of "book" (to book a hall, a recipe book) with standard Solr query syntax only, and
+ * the analysis screen showing each token's class and confidence; and the config set's user
+ * lexicon correcting the model where the cookbook's words mean something else. The same checks
+ * run in one standalone core ({@link CookbookSearchTest}) and across the shards of a SolrCloud
+ * collection ({@link CookbookCloudTest}); a subclass says where the notes are indexed.
  */
-public class CookbookSearchTest extends SolrTestCaseJ4 {
+public abstract class CookbookSearchChecks extends SolrTestCaseJ4 {
   /** Id, title, note; the comment says what the bundled model makes of "book" in it. */
-  private static final String[][] NOTES = {
+  static final String[][] NOTES = {
     {"k1", "Harvest supper", "We book the village hall for the harvest supper"}, // VERB
     {"k2", "Where to find it", "The recipe book is on the shelf"}, // NOUN
     {"k3", "Bread class", "Please book early"}, // VERB; the shortest note, so plain ranking favours it
@@ -40,27 +42,24 @@ public class CookbookSearchTest extends SolrTestCaseJ4 {
   private static final Set<String> BOOK_VERB = Set.of("k1", "k3", "k5");
   private static final Set<String> BOOK_NOUN = Set.of("k2", "k4");
 
-  private static DemoSolr solr;
+  /** The client that searches the indexed notes (a core's, or a collection's). */
+  protected abstract SolrClient client();
 
-  @BeforeClass
-  public static void startSolr() throws Exception {
-    solr = DemoSolr.start(createTempDir("solr-home"));
+  /** Adds the notes to {@code client} and commits. */
+  static void indexNotes(SolrClient client) throws Exception {
     for (String[] note : NOTES) {
       SolrInputDocument doc = new SolrInputDocument();
       doc.addField("id", note[0]);
       doc.addField("title", note[1]);
       doc.addField("body", note[2]);
-      solr.client.add(doc);
+      client.add(doc);
     }
-    solr.client.commit();
+    client.commit();
   }
 
-  @AfterClass
-  public static void stopSolr() throws Exception {
-    if (solr != null) {
-      solr.close();
-      solr = null;
-    }
+  /** Runs one search; a subclass may add parameters and check more of the response. */
+  protected QueryResponse query(ModifiableSolrParams params) throws Exception {
+    return client().query(params);
   }
 
   // (a) restricted to a class through the class-qualified terms
@@ -196,7 +195,7 @@ public class CookbookSearchTest extends SolrTestCaseJ4 {
   }
 
   /** The classes of the qualified terms of {@code words} (lowercased), in order. */
-  private static List<String> typesOf(String field, String text, String... words) throws Exception {
+  List<String> typesOf(String field, String text, String... words) throws Exception {
     List<String> types = new ArrayList<>();
     for (String word : words) {
       for (Map<String, Object> token : analyze(field, text)) {
@@ -211,16 +210,16 @@ public class CookbookSearchTest extends SolrTestCaseJ4 {
 
   // helpers
 
-  private static List<SolrDocument> search(String... nameValues) throws Exception {
+  List<SolrDocument> search(String... nameValues) throws Exception {
     ModifiableSolrParams params = new ModifiableSolrParams();
     for (int i = 0; i < nameValues.length; i += 2) {
       params.set(nameValues[i], nameValues[i + 1]);
     }
     params.set("fl", "id,score");
-    return new ArrayList<>(solr.client.query(params).getResults());
+    return new ArrayList<>(query(params).getResults());
   }
 
-  private static Set<String> idSet(List<SolrDocument> docs) {
+  static Set<String> idSet(List<SolrDocument> docs) {
     Set<String> ids = new TreeSet<>();
     for (SolrDocument doc : docs) {
       ids.add((String) doc.get("id"));
@@ -229,12 +228,17 @@ public class CookbookSearchTest extends SolrTestCaseJ4 {
   }
 
   /** The index-time tokens of {@code text} in {@code field} after the last stage of its analyzer. */
+  List<Map<String, Object>> analyze(String field, String text) throws SolrServerException, java.io.IOException {
+    return analyze(client(), field, text);
+  }
+
+  /** The index-time tokens of {@code text} in {@code field}, as {@code client}'s analysis screen shows them. */
   @SuppressWarnings("unchecked")
-  private static List<Map<String, Object>> analyze(String field, String text) throws SolrServerException, java.io.IOException {
+  static List<Map<String, Object>> analyze(SolrClient client, String field, String text) throws SolrServerException, java.io.IOException {
     ModifiableSolrParams params = new ModifiableSolrParams();
     params.set("analysis.fieldname", field);
     params.set("analysis.fieldvalue", text);
-    NamedList<Object> rsp = solr.client.request(new GenericSolrRequest(SolrRequest.METHOD.GET, "/analysis/field", params));
+    NamedList<Object> rsp = client.request(new GenericSolrRequest(SolrRequest.METHOD.GET, "/analysis/field", params));
     NamedList<Object> stages = (NamedList<Object>) rsp.findRecursive("analysis", "field_names", field, "index");
     List<NamedList<Object>> last = (List<NamedList<Object>>) stages.getVal(stages.size() - 1);
     List<Map<String, Object>> tokens = new ArrayList<>();
