@@ -94,8 +94,11 @@ final class AdaptCommand extends BaseCommand {
 
   @Override
   public Integer call() throws Exception {
-    HmmModel start = model.load();
     AdaptationOptions options = options();
+    new CommandFiles().input("--model", model.path).countedInputs("--text", input.files)
+        .input("--index", input.index == null ? null : input.index.directory).input("--held-out", heldOut)
+        .output("--out", out).replacing("--out", "--model").check();
+    HmmModel start = model.load();
     TextSource text = input.files != null
         ? new TextFileSource(input.files, chain.chain())
         : new IndexFieldSource(input.index.directory, input.index.field, chain.chain());

@@ -63,6 +63,7 @@ final class CrossValidateCommand extends BaseCommand {
       throw new ParameterException(spec.commandLine(), "--folds must be at least 2, not " + folds);
     }
     TrainingOptions options = training.toOptions();
+    new CommandFiles().countedInputs("--corpus", corpus.files).output("--report", json).check();
     Corpus input = corpus.open(TagColumn.UPOS);
     Progress progress = Progress.start("cross-validate", input, 2 * folds, err());
     List<FoldResult> results = new ArrayList<>();

@@ -39,6 +39,8 @@ final class EvaluateCommand extends BaseCommand {
 
   @Override
   public Integer call() throws Exception {
+    new CommandFiles().input("--model", model.path).countedInputs("--corpus", corpus.files)
+        .output("--report", json).output("--html", html).output("--png", png).check();
     HmmModel loaded = model.load();
     Corpus input = corpus.open(Provenance.tagColumn(loaded, TagColumn.UPOS));
     Progress progress = Progress.start("evaluate", input, 1, err());

@@ -52,6 +52,8 @@ final class LearningCurveCommand extends BaseCommand {
   @Override
   public Integer call() throws Exception {
     TrainingOptions options = training.toOptions();
+    new CommandFiles().countedInputs("--corpus", corpus.files).input("--eval", eval)
+        .output("--report", json).output("--png", png).check();
     Corpus train = corpus.open(TagColumn.UPOS);
     Corpus test = new Corpus(List.of(eval), corpus.format != null ? corpus.format : CorpusFormat.guess(eval), train.column());
     List<Point> points = new ArrayList<>();
