@@ -7,6 +7,7 @@ import java.nio.ByteBuffer;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.nio.file.attribute.BasicFileAttributes;
 import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.List;
@@ -186,11 +187,36 @@ public final class ModelFile {
 
   /** Reads the model file at {@code path}. */
   public static HmmModel read(Path path) throws IOException {
-    long size = Files.size(path);
-    if (size > MAX_FILE_BYTES) {
-      throw new ModelFormatException(path + ": " + size + " bytes is larger than any model (" + MAX_FILE_BYTES + ")");
+    return read(readBytes(path), path.toString());
+  }
+
+  /**
+   * The bytes of the model file at {@code path}, read whole only once it is known to be an
+   * ordinary file of at most {@link #MAX_FILE_BYTES} that starts with a model header: a device
+   * ({@code /dev/zero}, {@code /dev/urandom}), a pipe or a folder is refused before any byte is
+   * read, a foreign file after its first bytes.
+   */
+  public static byte[] readBytes(Path path) throws IOException {
+    BasicFileAttributes attributes = Files.readAttributes(path, BasicFileAttributes.class);
+    if (!attributes.isRegularFile()) {
+      throw new ModelFormatException(path + ": not an ordinary file (" + (attributes.isDirectory() ? "a folder" : "a device, pipe or socket")
+          + "); a model is read from a file written by train or adapt");
     }
-    return read(Files.readAllBytes(path), path.toString());
+    if (attributes.size() > MAX_FILE_BYTES) {
+      throw new ModelFormatException(path + ": " + attributes.size() + " bytes is larger than any model (" + MAX_FILE_BYTES + ")");
+    }
+    try (InputStream in = Files.newInputStream(path)) {
+      byte[] header = in.readNBytes(CodecUtil.headerLength(CODEC));
+      checkHeader(new ByteBuffersIndexInput(new ByteBuffersDataInput(List.of(ByteBuffer.wrap(header))), path.toString()),
+          path.toString());
+      byte[] rest = in.readNBytes((int) MAX_FILE_BYTES + 1 - header.length);
+      if (header.length + rest.length > MAX_FILE_BYTES) {
+        throw new ModelFormatException(path + ": larger than any model (" + MAX_FILE_BYTES + " bytes)");
+      }
+      byte[] all = Arrays.copyOf(header, header.length + rest.length);
+      System.arraycopy(rest, 0, all, header.length, rest.length);
+      return all;
+    }
   }
 
   /** Reads a model from a stream, such as a resource of a jar or a Solr config set. */
