@@ -46,6 +46,7 @@ final class TrainCommand extends BaseCommand {
     TagCounts counts = TagCounts.forOptions(options);
     try {
       progress.read(input, analysis.feeding(s -> counts.add(s.words(), s.tags())));
+      analysis.finish();
     } finally {
       analysis.close();
     }
