@@ -25,7 +25,7 @@ class BundledModelRebuildTest {
   void documentedCommandRebuildsTheBundledModelByteForByte() throws Exception {
     Path out = dir.resolve("en-ewt-upos.wcm");
     Cli.Result r = Cli.run("train", "--corpus", Corpora.ewtTrain().toString(), "--through-analyzer",
-        "--out", out.toString());
+        "--documents", "--with-treebank-tokens", "--out", out.toString());
     assertEquals(0, r.exitCode(), r::toString);
     byte[] bundled;
     try (InputStream in = DefaultModel.class.getClassLoader().getResourceAsStream(DefaultModel.RESOURCE)) {
