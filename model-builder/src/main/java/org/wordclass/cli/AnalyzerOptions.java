@@ -36,13 +36,18 @@ final class AnalyzerOptions {
     return chainOptions.chain();
   }
 
-  /** {@code action} on each sentence as the options want it: as it is, or as aligned analyzer tokens. */
+  /**
+   * {@code action} on each sentence as the options want it: as it is, or as aligned analyzer
+   * tokens. Later calls (one per pass over a corpus) share the first call's analyzer.
+   */
   Consumer<Sentence> feeding(Consumer<Sentence> action) {
     if (!enabled) {
       return action;
     }
-    analyzer = chain().build();
-    alignment = new AnalyzerAlignment(analyzer, skipBadSentences);
+    if (analyzer == null) {
+      analyzer = chain().build();
+      alignment = new AnalyzerAlignment(analyzer, skipBadSentences);
+    }
     return sentence -> {
       Sentence aligned = alignment.align(sentence);
       if (aligned != null) {

@@ -7,6 +7,7 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.Locale;
 import java.util.Map;
+import java.util.TreeMap;
 import org.wordclass.corpus.Corpus;
 import org.wordclass.corpus.TagColumn;
 import org.wordclass.model.HmmModel;
@@ -35,6 +36,12 @@ final class TrainCommand extends BaseCommand {
   @Mixin
   LexiconOption lexicon;
 
+  @Option(names = "--note", paramLabel = "KEY=VALUE",
+      description = "Record KEY=VALUE in the model's provenance as note.KEY (for example --note licence=CC-BY-4.0, "
+          + "--note model=fr-news); repeat for more. The note model names the model in inspect and in the "
+          + "analysis screen.")
+  Map<String, String> notes = new TreeMap<>();
+
   @Option(names = "--out", required = true, paramLabel = "MODEL", description = "The model file to write (.wcm).")
   Path out;
 
@@ -52,6 +59,7 @@ final class TrainCommand extends BaseCommand {
     progress.finish();
     Map<String, String> provenance = Provenance.of(input, corpus);
     analysis.describeInto(provenance);
+    notes.forEach((key, value) -> provenance.put(HmmModel.NOTE_PREFIX + key, value));
     // folded in before writing, so a bad lexicon leaves no model file behind
     HmmModel model = lexicon.applyTo(new HmmEstimator(options).estimate(counts, provenance));
     ModelFile.write(model, out);

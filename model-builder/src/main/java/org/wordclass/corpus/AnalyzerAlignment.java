@@ -21,9 +21,14 @@ import org.apache.lucene.analysis.tokenattributes.OffsetAttribute;
  *   <li><b>part of a word</b>: the token covers only part of one word (the chain split it): that
  *       word's tag;
  *   <li><b>several words</b>: the token covers two or more words (a contraction kept whole,
- *       {@code don't} = {@code do} + {@code n't}; a word with its clitic, {@code John's}): the
- *       tag of the <em>first</em> word, which in English is the host ({@code do}, {@code John},
- *       {@code I} of {@code I'm});
+ *       {@code don't} = {@code do} + {@code n't}; a word with its clitic, {@code John's}; a
+ *       CoNLL-U multiword token such as French {@code du} = {@code de} + {@code le}): the tag
+ *       of the <em>first</em> word, which in English is the host ({@code do}, {@code John},
+ *       {@code I} of {@code I'm}) and in the Romance and Germanic contractions the preposition
+ *       ({@code de} of {@code du}, {@code zu} of {@code zum}). A first word that ends in an
+ *       apostrophe is an elided article or pronoun leaning on the next word (French and
+ *       Italian {@code l'homme}, {@code dell'anno}, {@code qu'il}): it is passed over, and the
+ *       token takes the tag of the first word after it that is not elided;
  *   <li><b>no word</b>: the token covers no word (only possible when a filter invents text):
  *       left out, counted.
  * </ul>
@@ -42,6 +47,7 @@ public final class AnalyzerAlignment {
   private final boolean skipBadSentences;
   private final long[] caseCounts = new long[Case.values().length];
   private long wordsWithoutToken;
+  private long tokensTaggedByALaterWord;
   private long words;
   private long sentences;
   private final Map<String, Long> skipped = new LinkedHashMap<>();
@@ -77,11 +83,15 @@ public final class AnalyzerAlignment {
       stream.reset();
       while (stream.incrementToken()) {
         int first = -1;
+        int host = -1;
         int count = 0;
         for (int w = 0; w < sentence.size(); w++) {
           if (offsets[2 * w] < offset.endOffset() && offsets[2 * w + 1] > offset.startOffset()) {
             if (first < 0) {
               first = w;
+            }
+            if (host < 0 && !leansOnNext(sentence, w)) {
+              host = w;
             }
             count++;
             covered[w] = true;
@@ -92,9 +102,12 @@ public final class AnalyzerAlignment {
             : offsets[2 * first] == offset.startOffset() && offsets[2 * first + 1] == offset.endOffset() ? Case.ONE_WORD
             : Case.PART_OF_A_WORD;
         caseCounts[c.ordinal()]++;
+        if (c == Case.SEVERAL_WORDS && host > first) {
+          tokensTaggedByALaterWord++;
+        }
         if (c != Case.NO_WORD) {
           tokens.add(term.toString());
-          tags.add(sentence.tags().get(first));
+          tags.add(sentence.tags().get(c == Case.SEVERAL_WORDS && host >= 0 ? host : first));
         }
       }
       stream.end();
@@ -114,9 +127,36 @@ public final class AnalyzerAlignment {
     return new Sentence(tokens, tags, sentence.text(), spaces, sentence.file(), sentence.line(), List.of());
   }
 
+  /**
+   * Whether word {@code w} is elided, or part of an elided multiword token ({@code dell'} = {@code
+   * di} + {@code l'}), and so leans on the word after it.
+   */
+  private static boolean leansOnNext(Sentence sentence, int w) {
+    if (elided(sentence.words().get(w))) {
+      return true;
+    }
+    for (Sentence.MultiwordToken token : sentence.multiwordTokens()) {
+      if (token.first() <= w && w <= token.last()) {
+        return elided(token.form());
+      }
+    }
+    return false;
+  }
+
+  /** Whether {@code word} is an elided form, written with a final apostrophe ({@code l'}, {@code dell'}). */
+  static boolean elided(String word) {
+    int n = word.length();
+    return n > 1 && (word.charAt(n - 1) == '\'' || word.charAt(n - 1) == '\u2019');
+  }
+
   /** Tokens per alignment case so far. */
   public long count(Case c) {
     return caseCounts[c.ordinal()];
+  }
+
+  /** Tokens over several words whose first word was elided, so that a later word gave the tag. */
+  public long tokensTaggedByALaterWord() {
+    return tokensTaggedByALaterWord;
   }
 
   /** Gold words that no token covered. */
