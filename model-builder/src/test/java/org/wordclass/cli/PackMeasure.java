@@ -43,6 +43,7 @@ final class PackMeasure {
       EvaluationReport goldTrainedGoldTokens,
       EvaluationReport chain,
       EvaluationReport baseline,
+      EvaluationReport baselineByEndings,
       long tokensSeveralWords,
       long tokensTaggedByALaterWord,
       long modelBytes) {}
@@ -94,12 +95,15 @@ final class PackMeasure {
       Evaluation chain = new Evaluation(model);
       testTokens.forEach(chain::add);
       Evaluation baseline = new Evaluation(model);
-      MostFrequentTagBaseline mostFrequent = new MostFrequentTagBaseline(model, trainTokens);
+      MostFrequentTagBaseline mostFrequent = MostFrequentTagBaseline.withoutEndings(model, trainTokens);
       testTokens.forEach(s -> mostFrequent.addTo(baseline, s));
+      Evaluation baselineByEndings = new Evaluation(model);
+      MostFrequentTagBaseline byEndings = new MostFrequentTagBaseline(model, trainTokens);
+      testTokens.forEach(s -> byEndings.addTo(baselineByEndings, s));
       Evaluation goldTrained = new Evaluation(trainedOnTreebankWords(entry, train));
       corpus(test).forEach(goldTrained::add);
       return new Figures(entry, trainAlignment.words(), tokens(trainTokens), testAlignment.words(), multiword[0],
-          gold.report(), goldTrained.report(), chain.report(), baseline.report(), testAlignment.count(AnalyzerAlignment.Case.SEVERAL_WORDS),
+          gold.report(), goldTrained.report(), chain.report(), baseline.report(), baselineByEndings.report(), testAlignment.count(AnalyzerAlignment.Case.SEVERAL_WORDS),
           testAlignment.tokensTaggedByALaterWord(), shippedBytes(entry.model()).length);
     }
   }
