@@ -46,14 +46,17 @@ final class AnalyzerOptions {
 
   /**
    * {@code action} on each sentence as the options want it: as it is, or as aligned analyzer
-   * tokens; call {@link #finish} after the last sentence.
+   * tokens; call {@link #finish} after the last sentence. Later calls (one per pass over a corpus)
+   * share the first call's analyzer.
    */
   Consumer<Sentence> feeding(Consumer<Sentence> action) {
     if (!enabled) {
       return action;
     }
-    analyzer = chain().build();
-    alignment = new AnalyzerAlignment(analyzer, skipBadSentences);
+    if (analyzer == null) {
+      analyzer = chain().build();
+      alignment = new AnalyzerAlignment(analyzer, skipBadSentences);
+    }
     feed = alignment.feed(documents ? AnalyzerAlignment.Unit.DOCUMENT : AnalyzerAlignment.Unit.SENTENCE, action);
     return feed;
   }

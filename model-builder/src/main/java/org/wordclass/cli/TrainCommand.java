@@ -5,6 +5,7 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.Locale;
 import java.util.Map;
+import java.util.TreeMap;
 import java.util.function.Consumer;
 import org.wordclass.corpus.Sentence;
 import org.wordclass.corpus.Corpus;
@@ -41,6 +42,12 @@ final class TrainCommand extends BaseCommand {
           + "the punctuation and split contractions of chains that keep them.")
   boolean withTreebankTokens;
 
+  @Option(names = "--note", paramLabel = "KEY=VALUE",
+      description = "Record KEY=VALUE in the model's provenance as note.KEY (for example --note licence=CC-BY-4.0, "
+          + "--note model=fr-news); repeat for more. The note model names the model in inspect and in the "
+          + "analysis screen.")
+  Map<String, String> notes = new TreeMap<>();
+
   @Option(names = "--out", required = true, paramLabel = "MODEL", description = "The model file to write (.wcm).")
   Path out;
 
@@ -65,6 +72,8 @@ final class TrainCommand extends BaseCommand {
     if (withTreebankTokens && analysis.enabled) {
       provenance.put("analysis.withTreebankTokens", "true");
     }
+
+    notes.forEach((key, value) -> provenance.put(HmmModel.NOTE_PREFIX + key, value));
     // folded in before writing, so a bad lexicon leaves no model file behind
     HmmModel model = lexicon.applyTo(new HmmEstimator(options).estimate(counts, provenance));
     ModelFile.write(model, out);

@@ -25,9 +25,14 @@ import org.wordclass.analysis.WordClassOptions;
  *   <li><b>part of a word</b>: the token covers only part of one word (the chain split it): that
  *       word's tag;
  *   <li><b>several words</b>: the token covers two or more words (a contraction kept whole,
- *       {@code don't} = {@code do} + {@code n't}; a word with its clitic, {@code John's}): the
- *       tag of the <em>first</em> word, which in English is the host ({@code do}, {@code John},
- *       {@code I} of {@code I'm});
+ *       {@code don't} = {@code do} + {@code n't}; a word with its clitic, {@code John's}; a
+ *       CoNLL-U multiword token such as French {@code du} = {@code de} + {@code le}): the tag
+ *       of the <em>first</em> word, which in English is the host ({@code do}, {@code John},
+ *       {@code I} of {@code I'm}) and in the Romance and Germanic contractions the preposition
+ *       ({@code de} of {@code du}, {@code zu} of {@code zum}). A first word that ends in an
+ *       apostrophe is an elided article or pronoun leaning on the next word (French and
+ *       Italian {@code l'homme}, {@code dell'anno}, {@code qu'il}): it is passed over, and the
+ *       token takes the tag of the first word after it that is not elided;
  *   <li><b>no word</b>: the token covers no word (only possible when a filter invents text):
  *       left out, counted.
  * </ul>
@@ -46,6 +51,7 @@ public final class AnalyzerAlignment {
   private final boolean skipBadSentences;
   private final long[] caseCounts = new long[Case.values().length];
   private long wordsWithoutToken;
+  private long tokensTaggedByALaterWord;
   private long words;
   private long sentences;
   private long fieldValues;
@@ -108,9 +114,13 @@ public final class AnalyzerAlignment {
         int start = offset.startOffset();
         int end = offset.endOffset();
         int first = field.firstWordEndingAfter(start);
+        int host = -1;
         int count = 0;
         for (int w = first; w < field.wordCount && field.start(w) < end; w++) {
           if (field.end(w) > start) {
+            if (host < 0 && !field.leansOnNext.get(w)) {
+              host = w;
+            }
             count++;
             covered[w] = true;
           }
@@ -120,8 +130,11 @@ public final class AnalyzerAlignment {
             : field.start(first) == start && field.end(first) == end ? Case.ONE_WORD
             : Case.PART_OF_A_WORD;
         caseCounts[c.ordinal()]++;
+        if (c == Case.SEVERAL_WORDS && host > first) {
+          tokensTaggedByALaterWord++;
+        }
         if (c != Case.NO_WORD) {
-          piece.add(term.toString(), first, start, end, field);
+          piece.add(term.toString(), first, c == Case.SEVERAL_WORDS && host >= 0 ? host : first, start, end, field);
         }
       }
       stream.end();
@@ -189,6 +202,8 @@ public final class AnalyzerAlignment {
     int[] offsets = new int[64];
     final List<String> tags = new ArrayList<>();
     final List<Sentence> origin = new ArrayList<>();
+    /** Per word: whether it is elided and so passes its token's tag to the word after it. */
+    final List<Boolean> leansOnNext = new ArrayList<>();
     int wordCount;
     private boolean spaceBefore;
 
@@ -206,6 +221,7 @@ public final class AnalyzerAlignment {
         offsets[2 * (wordCount + w) + 1] = base + wordOffsets[2 * w + 1];
         tags.add(sentence.tags().get(w));
         origin.add(sentence);
+        leansOnNext.add(AnalyzerAlignment.leansOnNext(sentence, w));
       }
       wordCount += sentence.size();
       boolean[] spaces = sentence.spaceAfter();
@@ -245,9 +261,9 @@ public final class AnalyzerAlignment {
     int start = -1;
     int end;
 
-    void add(String token, int word, int tokenStart, int tokenEnd, FieldValue field) {
+    void add(String token, int word, int taggedBy, int tokenStart, int tokenEnd, FieldValue field) {
       tokens.add(token);
-      tags.add(field.tags.get(word));
+      tags.add(field.tags.get(taggedBy));
       if (firstWord < 0) {
         firstWord = word;
         start = tokenStart;
@@ -268,9 +284,36 @@ public final class AnalyzerAlignment {
     }
   }
 
+  /**
+   * Whether word {@code w} is elided, or part of an elided multiword token ({@code dell'} = {@code
+   * di} + {@code l'}), and so leans on the word after it.
+   */
+  private static boolean leansOnNext(Sentence sentence, int w) {
+    if (elided(sentence.words().get(w))) {
+      return true;
+    }
+    for (Sentence.MultiwordToken token : sentence.multiwordTokens()) {
+      if (token.first() <= w && w <= token.last()) {
+        return elided(token.form());
+      }
+    }
+    return false;
+  }
+
+  /** Whether {@code word} is an elided form, written with a final apostrophe ({@code l'}, {@code dell'}). */
+  static boolean elided(String word) {
+    int n = word.length();
+    return n > 1 && (word.charAt(n - 1) == '\'' || word.charAt(n - 1) == '\u2019');
+  }
+
   /** Tokens per alignment case so far. */
   public long count(Case c) {
     return caseCounts[c.ordinal()];
+  }
+
+  /** Tokens over several words whose first word was elided, so that a later word gave the tag. */
+  public long tokensTaggedByALaterWord() {
+    return tokensTaggedByALaterWord;
   }
 
   /** Gold words that no token covered. */
