@@ -130,12 +130,7 @@ final class PackMeasure {
 
   private static List<Sentence> aligned(Corpus corpus, AnalyzerAlignment alignment) {
     List<Sentence> out = new ArrayList<>();
-    corpus.forEach(s -> {
-      Sentence a = alignment.align(s);
-      if (a != null) {
-        out.add(a);
-      }
-    });
+    corpus.forEach(s -> out.addAll(alignment.align(List.of(s))));
     return out;
   }
 
