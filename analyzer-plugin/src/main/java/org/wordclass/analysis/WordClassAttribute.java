@@ -25,4 +25,13 @@ public interface WordClassAttribute extends Attribute {
 
   /** Sets all three values at once; {@code name} must be the name of {@code index}. */
   void setWordClass(String name, int index, double confidence);
+
+  /**
+   * Name of the model that tagged the token ({@link org.wordclass.model.HmmModel#name()}, such as
+   * {@code fr-gsd-upos}), shown in analysis screens; null when the token was not tagged.
+   */
+  String getModelName();
+
+  /** Sets the name of the model that tagged the token. */
+  void setModelName(String modelName);
 }

@@ -4,11 +4,12 @@ import java.util.Objects;
 import org.apache.lucene.util.AttributeImpl;
 import org.apache.lucene.util.AttributeReflector;
 
-/** Default implementation of {@link WordClassAttribute}; three fields, no allocation to set. */
+/** Default implementation of {@link WordClassAttribute}; four fields, no allocation to set. */
 public class WordClassAttributeImpl extends AttributeImpl implements WordClassAttribute {
   private String name;
   private int index = NO_CLASS;
   private double confidence = Double.NaN;
+  private String modelName;
 
   @Override
   public String getWordClass() {
@@ -33,13 +34,26 @@ public class WordClassAttributeImpl extends AttributeImpl implements WordClassAt
   }
 
   @Override
+  public String getModelName() {
+    return modelName;
+  }
+
+  @Override
+  public void setModelName(String modelName) {
+    this.modelName = modelName;
+  }
+
+  @Override
   public void clear() {
     setWordClass(null, NO_CLASS, Double.NaN);
+    modelName = null;
   }
 
   @Override
   public void copyTo(AttributeImpl target) {
-    ((WordClassAttribute) target).setWordClass(name, index, confidence);
+    WordClassAttribute other = (WordClassAttribute) target;
+    other.setWordClass(name, index, confidence);
+    other.setModelName(modelName);
   }
 
   @Override
@@ -52,6 +66,7 @@ public class WordClassAttributeImpl extends AttributeImpl implements WordClassAt
     reflector.reflect(WordClassAttribute.class, "wordClass", name);
     reflector.reflect(WordClassAttribute.class, "wordClassIndex", index);
     reflector.reflect(WordClassAttribute.class, "confidence", confidence);
+    reflector.reflect(WordClassAttribute.class, "model", modelName);
   }
 
   @Override
@@ -66,11 +81,12 @@ public class WordClassAttributeImpl extends AttributeImpl implements WordClassAt
     // compare bits so that NaN equals NaN, as a clone must equal its original
     return index == that.index
         && Objects.equals(name, that.name)
+        && Objects.equals(modelName, that.modelName)
         && Double.doubleToLongBits(confidence) == Double.doubleToLongBits(that.confidence);
   }
 
   @Override
   public int hashCode() {
-    return (31 * Objects.hashCode(name) + index) * 31 + Double.hashCode(confidence);
+    return ((31 * Objects.hashCode(name) + index) * 31 + Double.hashCode(confidence)) * 31 + Objects.hashCode(modelName);
   }
 }

@@ -86,6 +86,7 @@ public final class WordClassFilter extends TokenFilter {
 
   private final WordClassOptions options;
   private final TagSet tags;
+  private final String modelName;
   private final Decoder decoder;
   private final Lattice lattice;
   private final BytesRef[] payloads;
@@ -122,6 +123,7 @@ public final class WordClassFilter extends TokenFilter {
     super(input);
     this.options = options;
     this.tags = options.model().tags();
+    this.modelName = options.model().name();
     this.decoder = new Decoder(options.model(), options.order());
     this.lattice = decoder.lattice();
     this.payloads = options.payload().encodeAll(tags, options.weights());
@@ -204,6 +206,7 @@ public final class WordClassFilter extends TokenFilter {
     double confidence = options.confidence() ? decoder.tagPosterior(i, best[i]) : Double.NaN;
     typeAtt.setType(name);
     classAtt.setWordClass(name, tag, confidence);
+    classAtt.setModelName(modelName);
     if (payloadAtt != null) {
       // a private copy, so that a downstream filter editing the payload cannot change the table
       payload.copyBytes(payloads[tag]);

@@ -15,6 +15,7 @@ import org.wordclass.model.DefaultModel;
 import org.wordclass.model.HmmModel;
 import org.wordclass.model.LexiconFormatException;
 import org.wordclass.model.ModelFormatException;
+import org.wordclass.model.ShippedModels;
 import org.wordclass.model.UserLexicon;
 
 /**
@@ -36,6 +37,10 @@ import org.wordclass.model.UserLexicon;
  *   <li>{@code model}: resource name of a model file, read through the resource loader (so a
  *       path in the configuration directory works); default the bundled English UPOS model.
  *       Loaded models are shared through {@link ModelCache}.
+ *   <li>{@code language}: ISO 639-1 code of a model shipped in the jar ({@link ShippedModels}:
+ *       {@code fr}, {@code de}, ...; {@code en} is the bundled English model; {@code no} is the
+ *       Norwegian Bokmål model {@code nb}); not together with {@code model}. An unknown code
+ *       fails naming the shipped ones. A shipped model is read only when a factory asks for it.
  *   <li>{@code lexicon}: resource name of a user lexicon (see {@link UserLexicon} and {@code
  *       docs/user-lexicon.md}), read through the resource loader like the model: the words it
  *       lists take only the classes it gives them, every other word is tagged as before. The
@@ -75,6 +80,7 @@ public class WordClassFilterFactory extends TokenFilterFactory implements Resour
   private static final int MODEL_ORDER = 0;
 
   private final String modelName;
+  private final String language;
   private final String lexiconName;
   private final int order;
   private final boolean confidence;
@@ -93,6 +99,14 @@ public class WordClassFilterFactory extends TokenFilterFactory implements Resour
   public WordClassFilterFactory(Map<String, String> args) {
     super(args);
     modelName = get(args, "model");
+    language = get(args, "language");
+    if (language != null && modelName != null) {
+      throw new IllegalArgumentException("'model' and 'language' cannot both be given");
+    }
+    if (language != null && ShippedModels.resource(language) == null) {
+      throw new IllegalArgumentException("'language': no model is shipped for '" + language
+          + "'; shipped: " + ShippedModels.describe() + " (or name a model file with 'model')");
+    }
     lexiconName = get(args, "lexicon");
     if (lexiconName != null && lexiconName.isBlank()) {
       throw new IllegalArgumentException("'lexicon' must name a resource");
@@ -202,7 +216,8 @@ public class WordClassFilterFactory extends TokenFilterFactory implements Resour
   @Override
   public void inform(ResourceLoader loader) throws IOException {
     HmmModel model = lexiconName != null ? withLexicon(loader)
-        : modelName == null ? DefaultModel.get() : load(loader, modelName);
+        : modelName != null ? load(loader, modelName)
+        : shipped();
     if (selectedClasses != null) {
       WordClasses.mask(model.tags(), selectedClasses, keep ? "keepClasses" : "dropClasses");
     }
@@ -222,13 +237,28 @@ public class WordClassFilterFactory extends TokenFilterFactory implements Resour
 
   /** Both files are read in full before the lexicon is parsed, and parsed before the model is built. */
   private HmmModel withLexicon(ResourceLoader loader) throws IOException {
-    byte[] modelBytes = modelName == null ? null : read("model", modelName, () -> ModelCache.readModelBytes(loader, modelName));
+    byte[] modelBytes = modelName == null ? shippedBytes() : read("model", modelName, () -> ModelCache.readModelBytes(loader, modelName));
     byte[] lexiconBytes = read("lexicon", lexiconName, () -> {
       try (InputStream in = loader.openResource(lexiconName)) {
         return UserLexicon.readBytes(in, lexiconName);
       }
     });
-    return ModelCache.withLexicon(modelBytes, modelName, lexiconBytes, lexiconName);
+    String source = modelName != null || language == null ? modelName : ShippedModels.resource(language);
+    return ModelCache.withLexicon(modelBytes, source, lexiconBytes, lexiconName);
+  }
+
+  /** The shipped model asked for by {@code language}, shared through {@link ModelCache}; the bundled one by default. */
+  private HmmModel shipped() throws IOException {
+    byte[] bytes = shippedBytes();
+    return bytes == null ? DefaultModel.get() : ModelCache.get(bytes, ShippedModels.resource(language));
+  }
+
+  /** The bytes of the shipped model asked for by {@code language}; null for the bundled English one or none. */
+  private byte[] shippedBytes() throws IOException {
+    if (language == null || ShippedModels.resource(language).equals(DefaultModel.RESOURCE)) {
+      return null;
+    }
+    return ShippedModels.readBytes(language);
   }
 
   /** An I/O step on resource {@code name} of argument {@code arg}; a plain read failure names both. */

@@ -227,6 +227,25 @@ public final class HmmModel {
     return provenance;
   }
 
+  /** Prefix of the provenance entries a model's builder added by hand (its name, licence, source). */
+  public static final String NOTE_PREFIX = "note.";
+
+  /** Provenance key of a model's name, such as {@code fr-gsd-upos}. */
+  public static final String NAME_KEY = NOTE_PREFIX + "model";
+
+  /**
+   * A short name for the model, to show which model tagged a field: the name its builder gave it
+   * (provenance {@value #NAME_KEY}), else the file it was trained on ({@code corpus.1.file}), else
+   * {@code unnamed}.
+   */
+  public String name() {
+    String name = provenance.get(NAME_KEY);
+    if (name == null) {
+      name = provenance.getOrDefault("corpus.1.file", "unnamed");
+    }
+    return name;
+  }
+
   /** Approximate heap size in bytes of the loaded model. */
   public long ramBytesUsed() {
     return 20L * (logBigram.length + logTrigram.length) + 5L * states.size()

@@ -16,6 +16,7 @@ import org.apache.lucene.util.ResourceLoader;
 import org.wordclass.model.DefaultModel;
 import org.wordclass.model.HmmModel;
 import org.wordclass.model.ModelFormatException;
+import org.wordclass.model.ShippedModels;
 
 /** The factory through Lucene's SPI and CustomAnalyzer, its argument checks and model sharing. */
 public class TestWordClassFilterFactory extends BaseTokenStreamTestCase {
@@ -73,6 +74,56 @@ public class TestWordClassFilterFactory extends BaseTokenStreamTestCase {
     assertEquals(1.5f, options.weights().weight(model.tags().indexOf("VERB")), 0f);
     assertEquals(0.5f, options.weights().weight(model.tags().indexOf("DET")), 0f);
     assertEquals(model.order(), informed(CLASSPATH).options().order());
+  }
+
+  /** {@code language=} picks a model of the pack shipped in the jar (see docs/languages.md). */
+  public void testLanguagePicksAShippedModel() throws IOException {
+    HmmModel french = informed(CLASSPATH, "language", "fr").options().model();
+    assertEquals("fr-gsd-upos", french.name());
+    assertEquals("fr", french.provenance().get("note.language"));
+    assertEquals("fr_gsd-ud-dev.conllu", french.provenance().get("corpus.1.file"));
+    assertSame("every field asking for the same language shares one model", french,
+        informed(CLASSPATH, "language", "fr").options().model());
+    assertSame(DefaultModel.get(), informed(CLASSPATH, "language", "en").options().model());
+    assertSame("no is the Bokmaal model", informed(CLASSPATH, "language", "nb").options().model(),
+        informed(CLASSPATH, "language", "no").options().model());
+    for (String language : ShippedModels.resources().keySet()) {
+      HmmModel model = informed(CLASSPATH, "language", language).options().model();
+      assertTrue(language + " has the UPOS noun class", model.tags().indexOf("NOUN") >= 0);
+    }
+  }
+
+  public void testLanguageWithLexiconAppliesItToTheShippedModel() throws IOException {
+    // the loader serves only the lexicon: a shipped model comes from the jar, whatever the loader
+    ResourceLoader loader = new BytesLoader("lex.txt", "livre NOUN\n".getBytes(java.nio.charset.StandardCharsets.UTF_8));
+    HmmModel model = informed(loader, "language", "fr", "lexicon", "lex.txt").options().model();
+    assertEquals("fr-gsd-upos", model.name());
+    assertNotSame(informed(CLASSPATH, "language", "fr").options().model(), model);
+  }
+
+  public void testLanguageRefusals() {
+    IllegalArgumentException both = expectThrows(IllegalArgumentException.class,
+        () -> TokenFilterFactory.forName(WordClassFilterFactory.NAME, args("language", "fr", "model", "my.wcm")));
+    assertTrue(both.getMessage(), both.getMessage().contains("'model' and 'language' cannot both be given"));
+    IllegalArgumentException unknown = expectThrows(IllegalArgumentException.class,
+        () -> TokenFilterFactory.forName(WordClassFilterFactory.NAME, args("language", "da")));
+    assertTrue(unknown.getMessage(), unknown.getMessage().contains("'da'"));
+    assertTrue(unknown.getMessage(), unknown.getMessage().contains("cs, de, en, es, fi, fr, id, it, nb, nl, no, pt, ru, sv, tr"));
+    expectThrows(IllegalArgumentException.class,
+        () -> TokenFilterFactory.forName(WordClassFilterFactory.NAME, args("language", "FR")));
+  }
+
+  /** The analysis screen (attribute reflection) names the model that tagged each token. */
+  public void testAttributeNamesTheModel() throws IOException {
+    TokenStream stream = informed(CLASSPATH, "language", "de").create(whitespace("Wir buchen einen Tisch"));
+    WordClassAttribute att = stream.addAttribute(WordClassAttribute.class);
+    stream.reset();
+    while (stream.incrementToken()) {
+      assertEquals("de-gsd-upos", att.getModelName());
+      assertTrue(stream.reflectAsString(false), stream.reflectAsString(false).contains("model=de-gsd-upos"));
+    }
+    stream.end();
+    stream.close();
   }
 
   public void testCustomAnalyzer() throws IOException {

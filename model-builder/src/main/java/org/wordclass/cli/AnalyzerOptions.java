@@ -23,6 +23,13 @@ final class AnalyzerOptions {
   @Mixin
   ChainOptions chainOptions;
 
+  @Option(names = "--documents",
+      description = "With --through-analyzer: run each document (from one '# newdoc' comment to the next; a file "
+          + "without them is one document) through the chain as one field value, its sentences joined as running "
+          + "text, instead of each sentence on its own. The tokens are decoded, or learnt from, sentence by sentence "
+          + "where the chain's tokenizer marks sentences (sentenceStandard does), as the filter decodes them.")
+  boolean documents;
+
   @Option(names = "--skip-bad-sentences",
       description = "Skip, and count, sentences without raw text or whose text does not match their words, "
           + "instead of stopping at the first.")
@@ -30,25 +37,40 @@ final class AnalyzerOptions {
 
   private Analyzer analyzer;
   private AnalyzerAlignment alignment;
+  private AnalyzerAlignment.Feed feed;
 
   /** The chain named by the options. */
   AnalysisChain chain() {
     return chainOptions.chain();
   }
 
-  /** {@code action} on each sentence as the options want it: as it is, or as aligned analyzer tokens. */
+  /**
+   * {@code action} on each sentence as the options want it: as it is, or as aligned analyzer
+   * tokens; call {@link #finish} after the last sentence. Later calls (one per pass over a corpus)
+   * share the first call's analyzer.
+   */
   Consumer<Sentence> feeding(Consumer<Sentence> action) {
     if (!enabled) {
       return action;
     }
-    analyzer = chain().build();
-    alignment = new AnalyzerAlignment(analyzer, skipBadSentences);
-    return sentence -> {
-      Sentence aligned = alignment.align(sentence);
-      if (aligned != null) {
-        action.accept(aligned);
-      }
-    };
+    if (analyzer == null) {
+      analyzer = chain().build();
+      alignment = new AnalyzerAlignment(analyzer, skipBadSentences);
+    }
+    feed = alignment.feed(documents ? AnalyzerAlignment.Unit.DOCUMENT : AnalyzerAlignment.Unit.SENTENCE, action);
+    return feed;
+  }
+
+  /** Hands on the last document, in document mode. */
+  void finish() {
+    if (feed != null) {
+      feed.finish();
+    }
+  }
+
+  /** What one field value held, for reports. */
+  String unit() {
+    return documents ? "document" : "sentence";
   }
 
   /** How tokens and gold words were matched, after a pass; null when not through an analyzer. */
@@ -60,6 +82,7 @@ final class AnalyzerOptions {
   void describeInto(Map<String, String> provenance) {
     if (enabled) {
       provenance.put("analysis.chain", chain().toString());
+      provenance.put("analysis.fieldValue", unit());
       alignment.summary().forEach((k, v) -> provenance.put("analysis." + k, Long.toString(v)));
     }
   }

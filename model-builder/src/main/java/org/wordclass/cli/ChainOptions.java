@@ -11,8 +11,9 @@ import picocli.CommandLine.Option;
  * see the tokens the filter will see.
  */
 final class ChainOptions {
-  @Option(names = "--tokenizer", paramLabel = "NAME[:key=value,...]", defaultValue = "standard",
-      description = "Tokenizer of the chain, by its Lucene SPI name with arguments. Default: ${DEFAULT-VALUE}.")
+  @Option(names = "--tokenizer", paramLabel = "NAME[:key=value,...]", defaultValue = "sentenceStandard",
+      description = "Tokenizer of the chain, by its Lucene SPI name with arguments. Default: ${DEFAULT-VALUE} "
+          + "(the standard tokenizer's tokens, with sentences marked for the word-class filter).")
   String tokenizer;
 
   @Option(names = "--filter", paramLabel = "NAME[:key=value,...]",

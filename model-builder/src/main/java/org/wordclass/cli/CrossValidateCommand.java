@@ -37,6 +37,9 @@ final class CrossValidateCommand extends BaseCommand {
   @Mixin
   TrainingOptionsMixin training;
 
+  @Mixin
+  AnalyzerOptions analysis;
+
   @Option(names = "--folds", required = true, paramLabel = "K", description = "Number of folds, at least 2.")
   int folds;
 
@@ -68,8 +71,12 @@ final class CrossValidateCommand extends BaseCommand {
     Corpus input = corpus.open(TagColumn.UPOS);
     Progress progress = Progress.start("cross-validate", input, 2 * folds, err());
     List<FoldResult> results = new ArrayList<>();
-    for (int fold = 0; fold < folds; fold++) {
-      results.add(runFold(fold, input, options, progress));
+    try {
+      for (int fold = 0; fold < folds; fold++) {
+        results.add(runFold(fold, input, options, progress));
+      }
+    } finally {
+      analysis.close();
     }
     progress.finish();
     CrossValidationReport report = summarise(results);
@@ -83,13 +90,15 @@ final class CrossValidateCommand extends BaseCommand {
   private FoldResult runFold(int fold, Corpus input, TrainingOptions options, Progress progress) {
     TagCounts counts = TagCounts.forOptions(options);
     long[] seen = new long[1];
-    progress.read(input, inFold(fold, false, s -> counts.add(s.words(), s.tags()), seen));
+    progress.read(input, analysis.feeding(inFold(fold, false, s -> counts.add(s.words(), s.tags()), seen)));
+    analysis.finish();
     if (seen[0] < folds) {
       throw new ParameterException(spec.commandLine(),
           "--folds " + folds + " is more than the " + seen[0] + " sentences of the corpus");
     }
     Evaluation evaluation = new Evaluation(new HmmEstimator(options).estimate(counts, Map.of()));
-    progress.read(input, inFold(fold, true, evaluation::add, new long[1]));
+    progress.read(input, analysis.feeding(inFold(fold, true, evaluation::add, new long[1])));
+    analysis.finish();
     EvaluationReport r = evaluation.report();
     FoldResult result = new FoldResult(fold + 1, r.sentences(), r.tokens(), r.accuracy(), r.knownAccuracy(), r.unknownAccuracy());
     out().printf(Locale.ROOT, "fold %d/%d  accuracy %s  known %s  unknown %s  (%d tokens)%n", result.fold(), folds,

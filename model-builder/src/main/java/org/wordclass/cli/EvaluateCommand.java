@@ -51,12 +51,13 @@ final class EvaluateCommand extends BaseCommand {
         onGoldTokens.add(s);
         analyzed.accept(s);
       } : evaluation::add);
+      analysis.finish();
     } finally {
       analysis.close();
     }
     progress.finish();
     EvaluationReport report = analysis.enabled
-        ? evaluation.report().throughAnalyzer(analysis.chain().toString(), onGoldTokens.report(), analysis.alignmentCounts())
+        ? evaluation.report().throughAnalyzer(analysis.chain() + (analysis.documents ? " (whole documents)" : ""), onGoldTokens.report(), analysis.alignmentCounts())
         : evaluation.report();
     out().print(report.toText());
     out().flush();

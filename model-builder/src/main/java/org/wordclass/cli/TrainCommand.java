@@ -5,6 +5,9 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.Locale;
 import java.util.Map;
+import java.util.TreeMap;
+import java.util.function.Consumer;
+import org.wordclass.corpus.Sentence;
 import org.wordclass.corpus.Corpus;
 import org.wordclass.corpus.TagColumn;
 import org.wordclass.model.HmmModel;
@@ -33,6 +36,18 @@ final class TrainCommand extends BaseCommand {
   @Mixin
   LexiconOption lexicon;
 
+  @Option(names = "--with-treebank-tokens",
+      description = "With --through-analyzer: learn from the corpus's own tokens too (punctuation included), each "
+          + "sentence once as the chain emits it and once as the treebank splits it, so that the model also tags "
+          + "the punctuation and split contractions of chains that keep them.")
+  boolean withTreebankTokens;
+
+  @Option(names = "--note", paramLabel = "KEY=VALUE",
+      description = "Record KEY=VALUE in the model's provenance as note.KEY (for example --note licence=CC-BY-4.0, "
+          + "--note model=fr-news); repeat for more. The note model names the model in inspect and in the "
+          + "analysis screen.")
+  Map<String, String> notes = new TreeMap<>();
+
   @Option(names = "--out", required = true, paramLabel = "MODEL", description = "The model file to write (.wcm).")
   Path out;
 
@@ -44,13 +59,21 @@ final class TrainCommand extends BaseCommand {
     Progress progress = Progress.start("train", input, 1, err());
     TagCounts counts = TagCounts.forOptions(options);
     try {
-      progress.read(input, analysis.feeding(s -> counts.add(s.words(), s.tags())));
+      Consumer<Sentence> learn = s -> counts.add(s.words(), s.tags());
+      Consumer<Sentence> throughChain = analysis.feeding(learn);
+      progress.read(input, withTreebankTokens && analysis.enabled ? throughChain.andThen(learn) : throughChain);
+      analysis.finish();
     } finally {
       analysis.close();
     }
     progress.finish();
     Map<String, String> provenance = Provenance.of(input, corpus);
     analysis.describeInto(provenance);
+    if (withTreebankTokens && analysis.enabled) {
+      provenance.put("analysis.withTreebankTokens", "true");
+    }
+
+    notes.forEach((key, value) -> provenance.put(HmmModel.NOTE_PREFIX + key, value));
     // folded in before writing, so a bad lexicon leaves no model file behind
     HmmModel model = lexicon.applyTo(new HmmEstimator(options).estimate(counts, provenance));
     ModelFile.write(model, out);

@@ -36,6 +36,7 @@ public final class WordclassCommand implements Callable<Integer> {
         new TrainCommand(),
         new EvaluateCommand(),
         new CrossValidateCommand(),
+        new BuildPackCommand(),
         new LearningCurveCommand(),
         new InspectCommand(),
         new TagCommand(),

@@ -8,6 +8,7 @@ import java.util.List;
 import java.util.Map;
 import org.apache.lucene.analysis.Analyzer;
 import org.apache.lucene.analysis.custom.CustomAnalyzer;
+import org.wordclass.analysis.SentenceStandardTokenizerFactory;
 
 /**
  * A Lucene analysis chain named the way {@link CustomAnalyzer} takes it: a tokenizer and token
@@ -31,8 +32,12 @@ public final class AnalysisChain {
     }
   }
 
-  /** The chain used when none is given: Lucene's standard tokenizer and nothing else. */
-  public static final AnalysisChain DEFAULT = new AnalysisChain(parse("standard"), List.of());
+  /**
+   * The chain used when none is given, the one the bundled model is trained through and the docs
+   * recommend: the standard tokenizer's tokens with sentences marked ({@code sentenceStandard}),
+   * nothing else before the word-class filter.
+   */
+  public static final AnalysisChain DEFAULT = new AnalysisChain(parse(SentenceStandardTokenizerFactory.NAME), List.of());
 
   private final Component tokenizer;
   private final List<Component> filters;

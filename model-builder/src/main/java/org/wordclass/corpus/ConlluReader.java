@@ -10,7 +10,8 @@ import java.util.regex.Pattern;
  * (column 4) or XPOS (column 5).
  *
  * <ul>
- *   <li>Comment lines ({@code #}) are skipped, except {@code # text =}, kept as the raw text.
+ *   <li>Comment lines ({@code #}) are skipped, except {@code # text =}, kept as the raw text, and
+ *       {@code # newdoc}, which makes the sentence the first of a document.
  *   <li>Multiword-token lines ({@code 3-4 don't}) are not words: the syntactic words that follow
  *       them ({@code do}, {@code n't}) are, because they carry the tags. The range line's
  *       {@code SpaceAfter=No} applies to its last word.
@@ -59,6 +60,8 @@ public final class ConlluReader extends SentenceReader {
       if (line.startsWith("#")) {
         if (line.startsWith("# text =")) {
           text = line.substring("# text =".length()).strip();
+        } else if (line.startsWith("# newdoc")) {
+          startDocument();
         }
         continue;
       }

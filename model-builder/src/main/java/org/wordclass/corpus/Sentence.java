@@ -14,10 +14,18 @@ import java.util.List;
  * @param line line number of the sentence's first line in that file
  * @param multiwordTokens surface tokens that stand for several words (CoNLL-U ranges such as
  *     {@code 3-4 don't}), in order; empty when there are none or the format has none
+ * @param startsDocument whether the sentence is the first of a document: of its file, or after a
+ *     CoNLL-U {@code # newdoc} comment
  */
 public record Sentence(
     List<String> words, List<String> tags, String text, boolean[] spaceAfter, String file, long line,
-    List<MultiwordToken> multiwordTokens) {
+    List<MultiwordToken> multiwordTokens, boolean startsDocument) {
+
+  /** A sentence that does not start a document. */
+  public Sentence(List<String> words, List<String> tags, String text, boolean[] spaceAfter, String file, long line,
+      List<MultiwordToken> multiwordTokens) {
+    this(words, tags, text, spaceAfter, file, line, multiwordTokens, false);
+  }
 
   /** A surface token covering words {@code first..last} (0-based, inclusive). */
   public record MultiwordToken(int first, int last, String form) {}

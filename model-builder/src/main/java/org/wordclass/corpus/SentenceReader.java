@@ -18,6 +18,8 @@ public abstract class SentenceReader implements Iterator<Sentence>, Closeable {
   protected final String fileName;
   protected final TagColumn column;
   private Sentence next;
+  /** Whether the next sentence read starts a document: the file's first, or one after {@link #startDocument}. */
+  private boolean documentPending = true;
   private boolean finished;
   private long sentences;
   private Set<String> tagsSeen;
@@ -73,6 +75,11 @@ public abstract class SentenceReader implements Iterator<Sentence>, Closeable {
     return lines.sha256();
   }
 
+  /** Marks the next sentence read as the first of a new document. */
+  protected void startDocument() {
+    documentPending = true;
+  }
+
   protected CorpusFormatException error(String problem) {
     return new CorpusFormatException(fileName, lines.lineNumber(), problem);
   }
@@ -107,7 +114,10 @@ public abstract class SentenceReader implements Iterator<Sentence>, Closeable {
     for (int i = 0; i < spaces.length; i++) {
       spaces[i] = spaceAfter.get(i);
     }
-    return new Sentence(List.copyOf(words), List.copyOf(tags), text, spaces, fileName, firstLine, List.copyOf(multiwordTokens));
+    boolean startsDocument = documentPending;
+    documentPending = false;
+    return new Sentence(List.copyOf(words), List.copyOf(tags), text, spaces, fileName, firstLine, List.copyOf(multiwordTokens),
+        startsDocument);
   }
 
   protected static <T> List<T> newList() {

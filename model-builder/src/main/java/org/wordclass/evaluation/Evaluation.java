@@ -26,6 +26,7 @@ public final class Evaluation {
   private long correct;
   private long knownTokens;
   private long knownCorrect;
+  private long firstCorrect;
   private long candidates;
   private long nanos;
 
@@ -75,6 +76,9 @@ public final class Evaluation {
       boolean right = g == p;
       if (right) {
         correct++;
+        if (i == 0) {
+          firstCorrect++;
+        }
       }
       if (known[i]) {
         knownTokens++;
@@ -95,6 +99,11 @@ public final class Evaluation {
 
   public double knownAccuracy() {
     return ratio(knownCorrect, knownTokens);
+  }
+
+  /** Accuracy on the first token of each sentence, where a capital letter says least. */
+  public double firstWordAccuracy() {
+    return ratio(firstCorrect, sentences);
   }
 
   public double unknownAccuracy() {

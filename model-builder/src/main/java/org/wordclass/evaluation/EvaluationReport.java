@@ -10,7 +10,8 @@ import java.util.Map;
 /**
  * The result of an evaluation, shaped for JSON output (Jackson serialises the record
  * components): the top level holds {@code accuracy}, {@code knownAccuracy}, {@code
- * unknownAccuracy} (fractions in 0..1) and {@code tokens}. When the tokens came from an
+ * unknownAccuracy} (fractions in 0..1), {@code tokens}, and {@code firstWordAccuracy}, the accuracy on
+ * the first token of each sentence decoded. When the tokens came from an
  * analysis chain, {@code goldTokens} holds the report on the treebank's own tokens and {@code
  * alignment} how the two were matched; both are absent otherwise.
  */
@@ -32,7 +33,9 @@ public record EvaluationReport(
     ConfusionMatrix confusionMatrix,
     String tokenSource,
     EvaluationReport goldTokens,
-    Map<String, Long> alignment) {
+    Map<String, Long> alignment,
+    double firstWordAccuracy,
+    long firstWords) {
 
   /** Where the scored tokens came from when they are the gold tokens themselves. */
   public static final String GOLD_TOKENS = "gold tokens";
@@ -90,7 +93,7 @@ public record EvaluationReport(
         e.sentences(), e.tokens() == 0 ? 0 : (double) unknown / e.tokens(), e.averageCandidates(),
         e.tokensPerSecond(), e.model().order(), perTag,
         List.copyOf(confusions.subList(0, Math.min(20, confusions.size()))),
-        new ConfusionMatrix(List.copyOf(labels), copy), GOLD_TOKENS, null, null);
+        new ConfusionMatrix(List.copyOf(labels), copy), GOLD_TOKENS, null, null, e.firstWordAccuracy(), e.sentences());
   }
 
   /**
@@ -100,7 +103,7 @@ public record EvaluationReport(
   public EvaluationReport throughAnalyzer(String chain, EvaluationReport gold, Map<String, Long> alignmentCounts) {
     return new EvaluationReport(accuracy, knownAccuracy, unknownAccuracy, tokens, knownTokens, unknownTokens,
         sentences, unknownShare, averageCandidatesPerToken, tokensPerSecond, order, perTag, topConfusions,
-        confusionMatrix, "analyzer tokens: " + chain, gold, alignmentCounts);
+        confusionMatrix, "analyzer tokens: " + chain, gold, alignmentCounts, firstWordAccuracy, firstWords);
   }
 
   /** A plain-text summary for the terminal. */
@@ -117,6 +120,8 @@ public record EvaluationReport(
     s.append(String.format(Locale.ROOT, "known words      %s  (%d tokens)%n", Figures.format("%.4f", knownAccuracy), knownTokens));
     s.append(String.format(Locale.ROOT, "unknown words    %s  (%d tokens, %.1f%%)%n", Figures.format("%.4f", unknownAccuracy),
         unknownTokens, 100 * unknownShare));
+    s.append(String.format(Locale.ROOT, "first words      %s  (%d tokens, the first of each sentence decoded)%n",
+        Figures.format("%.4f", firstWordAccuracy), firstWords));
     s.append(String.format(Locale.ROOT, "candidates/token %s%n", Figures.format("%.2f", averageCandidatesPerToken)));
     s.append(String.format(Locale.ROOT, "%nper tag         %12s %12s %9s %9s %7s%n", TagScore.LABELS.toArray()));
     for (TagScore t : perTag) {

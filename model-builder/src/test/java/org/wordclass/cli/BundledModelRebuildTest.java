@@ -25,7 +25,8 @@ class BundledModelRebuildTest {
   void documentedCommandRebuildsTheBundledModelByteForByte() throws Exception {
     Path out = dir.resolve("en-ewt-upos.wcm");
     Cli.Result r = Cli.run("train", "--corpus", Corpora.ewtTrain().toString(), "--through-analyzer",
-        "--out", out.toString());
+        "--documents", "--with-treebank-tokens", "--note", "language=en", "--note", "model=en-ewt-upos", "--note", "licence=CC BY-SA 4.0",
+        "--note", "source=UniversalDependencies/UD_English-EWT @ 15d613d8", "--note", "treebank=UD English EWT", "--out", out.toString());
     assertEquals(0, r.exitCode(), r::toString);
     byte[] bundled;
     try (InputStream in = DefaultModel.class.getClassLoader().getResourceAsStream(DefaultModel.RESOURCE)) {

@@ -2,7 +2,6 @@ package org.wordclass.corpus;
 
 import static org.junit.jupiter.api.Assertions.assertArrayEquals;
 import static org.junit.jupiter.api.Assertions.assertEquals;
-import static org.junit.jupiter.api.Assertions.assertNull;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
@@ -18,6 +17,13 @@ class AnalyzerAlignmentTest {
     boolean[] spaces = new boolean[words.length];
     Arrays.fill(spaces, true);
     return new Sentence(List.of(words), List.of(tags), text, spaces, "orders.conllu", 7, mwt);
+  }
+
+  /** The aligned tokens of {@code s}, which must come out as one sentence. */
+  private static Sentence one(AnalyzerAlignment alignment, Sentence s) {
+    List<Sentence> aligned = alignment.align(List.of(s));
+    assertEquals(1, aligned.size(), aligned::toString);
+    return aligned.get(0);
   }
 
   /** "We don't bake rye, sorry." with "don't" as the multiword token do + n't. */
@@ -38,7 +44,7 @@ class AnalyzerAlignmentTest {
   void standardTokenizerKeepsContractionWholeAndDropsPunctuation() {
     try (Analyzer analyzer = AnalysisChain.DEFAULT.build()) {
       AnalyzerAlignment alignment = new AnalyzerAlignment(analyzer, false);
-      Sentence aligned = alignment.align(contraction());
+      Sentence aligned = one(alignment, contraction());
       assertEquals(List.of("We", "don't", "bake", "rye", "sorry"), aligned.words());
       // a token over several words takes the tag of the first one: "don't" -> AUX (from "do")
       assertEquals(List.of("PRON", "AUX", "VERB", "NOUN", "INTJ"), aligned.tags());
@@ -51,7 +57,7 @@ class AnalyzerAlignmentTest {
   @Test
   void lowercasingBeforeTheFilterIsReproduced() {
     try (Analyzer analyzer = AnalysisChain.of("whitespace", List.of("lowercase")).build()) {
-      Sentence aligned = new AnalyzerAlignment(analyzer, false).align(contraction());
+      Sentence aligned = one(new AnalyzerAlignment(analyzer, false), contraction());
       assertEquals(List.of("we", "don't", "bake", "rye,", "sorry."), aligned.words());
       assertEquals(List.of("PRON", "AUX", "VERB", "NOUN", "INTJ"), aligned.tags());
     }
@@ -63,7 +69,7 @@ class AnalyzerAlignmentTest {
         new String[] {"VERB", "NUM", "NOUN"}, List.of());
     try (Analyzer analyzer = AnalysisChain.of("letter", List.of()).build()) {
       AnalyzerAlignment alignment = new AnalyzerAlignment(analyzer, false);
-      Sentence aligned = alignment.align(s);
+      Sentence aligned = one(alignment, s);
       assertEquals(List.of("Ship", "kg", "today"), aligned.words());
       assertEquals(List.of("VERB", "NUM", "NOUN"), aligned.tags());
       assertEquals(1, alignment.count(AnalyzerAlignment.Case.PART_OF_A_WORD));
@@ -75,10 +81,10 @@ class AnalyzerAlignmentTest {
     Sentence noText = sentence(null, new String[] {"Rye"}, new String[] {"NOUN"}, List.of());
     try (Analyzer analyzer = AnalysisChain.DEFAULT.build()) {
       CorpusFormatException e = assertThrows(CorpusFormatException.class,
-          () -> new AnalyzerAlignment(analyzer, false).align(noText));
+          () -> new AnalyzerAlignment(analyzer, false).align(List.of(noText)));
       assertEquals("orders.conllu:7: sentence has no '# text =' line", e.getMessage());
       AnalyzerAlignment skipping = new AnalyzerAlignment(analyzer, true);
-      assertNull(skipping.align(noText));
+      assertTrue(skipping.align(List.of(noText)).isEmpty());
       assertEquals(1L, skipping.summary().get("sentencesSkipped"));
     }
   }

@@ -50,22 +50,24 @@ public final class AccuracyTables {
 
   private static HmmModel train(Corpus corpus, TrainingOptions options, AnalyzerAlignment alignment) {
     TagCounts counts = new TagCounts();
-    corpus.forEach(through(alignment, s -> counts.add(s.words(), s.tags())));
+    through(corpus, alignment, s -> counts.add(s.words(), s.tags()));
     return new HmmEstimator(options).estimate(counts, Map.of());
   }
 
-  private static Consumer<Sentence> through(AnalyzerAlignment alignment, Consumer<Sentence> action) {
-    return alignment == null ? action : s -> {
-      Sentence aligned = alignment.align(s);
-      if (aligned != null) {
-        action.accept(aligned);
-      }
-    };
+  /** Each sentence of {@code corpus} to {@code action}, as it is or as the aligned tokens of the chain. */
+  private static void through(Corpus corpus, AnalyzerAlignment alignment, Consumer<Sentence> action) {
+    if (alignment == null) {
+      corpus.forEach(action);
+      return;
+    }
+    AnalyzerAlignment.Feed feed = alignment.feed(AnalyzerAlignment.Unit.SENTENCE, action);
+    corpus.forEach(feed);
+    feed.finish();
   }
 
   private static EvaluationReport score(HmmModel model, Corpus corpus, AnalyzerAlignment alignment) {
     Evaluation evaluation = new Evaluation(model);
-    corpus.forEach(through(alignment, evaluation::add));
+    through(corpus, alignment, evaluation::add);
     return evaluation.report();
   }
 

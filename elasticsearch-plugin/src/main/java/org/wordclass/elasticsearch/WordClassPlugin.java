@@ -1,0 +1,33 @@
+package org.wordclass.elasticsearch;
+
+import java.util.List;
+import java.util.Map;
+import org.elasticsearch.index.analysis.TokenFilterFactory;
+import org.elasticsearch.indices.analysis.AnalysisModule.AnalysisProvider;
+import org.elasticsearch.plugins.AnalysisPlugin;
+import org.elasticsearch.plugins.Plugin;
+import org.elasticsearch.plugins.SearchPlugin;
+import org.wordclass.analysis.WordClassFilterFactory;
+import org.wordclass.engine.ClassRestrictedQuerySpec;
+import org.wordclass.engine.ClassWeightedQuerySpec;
+
+/**
+ * The Elasticsearch plugin: registers the token filter type {@value WordClassFilterFactory#NAME}
+ * and the queries {@value ClassRestrictedQuerySpec#NAME} and {@value
+ * ClassWeightedQuerySpec#NAME}. A thin adapter over {@code org.wordclass.engine}; see
+ * docs/elasticsearch.md.
+ */
+public class WordClassPlugin extends Plugin implements AnalysisPlugin, SearchPlugin {
+  @Override
+  public Map<String, AnalysisProvider<TokenFilterFactory>> getTokenFilters() {
+    return Map.of(WordClassFilterFactory.NAME, AnalysisPlugin.requiresAnalysisSettings(
+        (indexSettings, environment, name, settings) -> new WordClassTokenFilterFactory(environment, name, settings)));
+  }
+
+  @Override
+  public List<QuerySpec<?>> getQueries() {
+    return List.of(
+        new QuerySpec<>(ClassRestrictedQuerySpec.NAME, ClassRestrictedQueryBuilder::new, ClassRestrictedQueryBuilder::fromXContent),
+        new QuerySpec<>(ClassWeightedQuerySpec.NAME, ClassWeightedQueryBuilder::new, ClassWeightedQueryBuilder::fromXContent));
+  }
+}

@@ -1,0 +1,64 @@
+package org.wordclass.elasticsearch;
+
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.Set;
+import org.apache.lucene.analysis.TokenStream;
+import org.elasticsearch.common.settings.Settings;
+import org.elasticsearch.env.Environment;
+import org.elasticsearch.index.analysis.AbstractTokenFilterFactory;
+import org.wordclass.analysis.WordClassFilterFactory;
+import org.wordclass.engine.EngineFilters;
+import org.wordclass.engine.WordClassFilterHolder;
+
+/**
+ * The {@value WordClassFilterFactory#NAME} filter type of an index's analysis settings: the
+ * filter's settings become the Lucene factory's arguments, and model and lexicon files are read
+ * from the node's configuration directory (see {@link EngineFilters}). Any bad setting fails
+ * index creation with an {@link IllegalArgumentException}, which Elasticsearch answers with HTTP
+ * 400.
+ */
+final class WordClassTokenFilterFactory extends AbstractTokenFilterFactory implements WordClassFilterHolder {
+  /** Settings Elasticsearch itself reads from a filter definition. */
+  private static final Set<String> ENGINE_KEYS = Set.of("type");
+
+  private final WordClassFilterFactory factory;
+
+  WordClassTokenFilterFactory(Environment environment, String name, Settings settings) {
+    super(name, settings);
+    factory = EngineFilters.create(name, flat(settings), ENGINE_KEYS, environment.configFile());
+  }
+
+  /**
+   * The settings as dotted keys and text values. Elasticsearch keeps a list as one list-valued
+   * key, which becomes {@code key.0}, {@code key.1}, ... as the engine layer expects; a list of
+   * one item and a plain value mean the same to the factory, so both pass as the plain value.
+   */
+  private static Map<String, String> flat(Settings settings) {
+    Map<String, String> flat = new LinkedHashMap<>();
+    for (String key : settings.keySet()) {
+      List<String> items = settings.getAsList(key, List.of(), false);
+      if (items.size() == 1) {
+        flat.put(key, items.get(0));
+      } else if (items.isEmpty()) {
+        flat.put(key, "");
+      } else {
+        for (int i = 0; i < items.size(); i++) {
+          flat.put(key + "." + i, items.get(i));
+        }
+      }
+    }
+    return flat;
+  }
+
+  @Override
+  public WordClassFilterFactory wordClassFactory() {
+    return factory;
+  }
+
+  @Override
+  public TokenStream create(TokenStream input) {
+    return factory.create(input);
+  }
+}
