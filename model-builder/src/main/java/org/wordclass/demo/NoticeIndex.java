@@ -87,7 +87,7 @@ public final class NoticeIndex implements Closeable {
   }
 
   private static AnalysisChain chain(Component... filters) {
-    return new AnalysisChain(component("standard"), List.of(filters));
+    return new AnalysisChain(component("sentenceStandard"), List.of(filters));
   }
 
   private static Component component(String name, String... keyValues) {

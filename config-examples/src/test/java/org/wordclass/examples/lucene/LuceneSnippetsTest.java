@@ -75,19 +75,19 @@ public class LuceneSnippetsTest extends LuceneTestCase {
   private static Analyzer fields() throws IOException {
     // doc: per-field
     Analyzer tagged = CustomAnalyzer.builder()
-        .withTokenizer("standard")
+        .withTokenizer("sentenceStandard")
         .addTokenFilter("wordClass", "payload", "tag")
         .addTokenFilter("lowercase")
         .addTokenFilter("porterStem")
         .build();
     Analyzer classed = CustomAnalyzer.builder()
-        .withTokenizer("standard")
+        .withTokenizer("sentenceStandard")
         .addTokenFilter("wordClass", "qualifiedTerms", "true")
         .addTokenFilter("lowercase")
         .addTokenFilter("porterStem")
         .build();
     Analyzer weighted = CustomAnalyzer.builder()
-        .withTokenizer("standard")
+        .withTokenizer("sentenceStandard")
         .addTokenFilter("wordClass", "payload", "weight", "weights", "NOUN:3.0,PROPN:3.0")
         .addTokenFilter("lowercase")
         .addTokenFilter("porterStem")
@@ -143,7 +143,7 @@ public class LuceneSnippetsTest extends LuceneTestCase {
     // doc: modelFromAFolder
     // "model" is read relative to the folder given to the builder
     CustomAnalyzer analyzer = CustomAnalyzer.builder(conf)
-        .withTokenizer("standard")
+        .withTokenizer("sentenceStandard")
         .addTokenFilter("wordClass", "model", "wordclass/my-domain.wcm")
         .addTokenFilter("lowercase")
         .build();
@@ -152,7 +152,7 @@ public class LuceneSnippetsTest extends LuceneTestCase {
     assertNotSame("a file is read through the model cache, not taken from the jar", DefaultModel.get(), loaded);
     assertEquals(DefaultModel.get().tags(), loaded.tags());
     CustomAnalyzer again = CustomAnalyzer.builder(conf)
-        .withTokenizer("standard")
+        .withTokenizer("sentenceStandard")
         .addTokenFilter("wordClass", "model", "wordclass/my-domain.wcm")
         .build();
     assertSame("a second analyzer on the same file shares the model",
