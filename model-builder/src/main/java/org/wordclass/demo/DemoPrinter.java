@@ -14,7 +14,7 @@ public final class DemoPrinter {
   private static final String INTRO = "Word classes (parts of speech) let a search tell 'board the ferry' from"
       + " 'the notice board'. %d invented notices of the Skerry Sound ferry office are indexed in memory"
       + " twice: plainly, and through the wordClass filter, which tags every word with the bundled English"
-      + " model (a hidden Markov model decoding each notice as one sequence), stores the class as payload"
+      + " model (a hidden Markov model decoding each notice sentence by sentence), stores the class as payload"
       + " and adds a class-qualified term such as board_verb. A class-restricted query matches the word"
       + " only where the tagger gave it the class asked for: wrong-class hits go (precision up), and so"
       + " does every right use the tagger mis-tags (recall lost). A class-boosted query keeps every hit"
