@@ -7,6 +7,7 @@ import java.nio.ByteBuffer;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.nio.file.attribute.BasicFileAttributes;
 import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.List;
@@ -186,11 +187,36 @@ public final class ModelFile {
 
   /** Reads the model file at {@code path}. */
   public static HmmModel read(Path path) throws IOException {
-    long size = Files.size(path);
-    if (size > MAX_FILE_BYTES) {
-      throw new ModelFormatException(path + ": " + size + " bytes is larger than any model (" + MAX_FILE_BYTES + ")");
+    return read(readBytes(path), path.toString());
+  }
+
+  /**
+   * The bytes of the model file at {@code path}, read whole only once it is known to be an
+   * ordinary file of at most {@link #MAX_FILE_BYTES} that starts with a model header: a device
+   * ({@code /dev/zero}, {@code /dev/urandom}), a pipe or a folder is refused before any byte is
+   * read, a foreign file after its first bytes.
+   */
+  public static byte[] readBytes(Path path) throws IOException {
+    BasicFileAttributes attributes = Files.readAttributes(path, BasicFileAttributes.class);
+    if (!attributes.isRegularFile()) {
+      throw new ModelFormatException(path + ": not an ordinary file (" + (attributes.isDirectory() ? "a folder" : "a device, pipe or socket")
+          + "); a model is read from a file written by train or adapt");
     }
-    return read(Files.readAllBytes(path), path.toString());
+    if (attributes.size() > MAX_FILE_BYTES) {
+      throw new ModelFormatException(path + ": " + attributes.size() + " bytes is larger than any model (" + MAX_FILE_BYTES + ")");
+    }
+    try (InputStream in = Files.newInputStream(path)) {
+      byte[] header = in.readNBytes(CodecUtil.headerLength(CODEC));
+      checkHeader(new ByteBuffersIndexInput(new ByteBuffersDataInput(List.of(ByteBuffer.wrap(header))), path.toString()),
+          path.toString());
+      byte[] rest = in.readNBytes((int) MAX_FILE_BYTES + 1 - header.length);
+      if (header.length + rest.length > MAX_FILE_BYTES) {
+        throw new ModelFormatException(path + ": larger than any model (" + MAX_FILE_BYTES + " bytes)");
+      }
+      byte[] all = Arrays.copyOf(header, header.length + rest.length);
+      System.arraycopy(rest, 0, all, header.length, rest.length);
+      return all;
+    }
   }
 
   /** Reads a model from a stream, such as a resource of a jar or a Solr config set. */
@@ -274,7 +300,7 @@ public final class ModelFile {
     Limits limits = new Limits(in, name);
     Map<String, String> provenance = readMap(in, limits);
     int order = in.readByte();
-    int tagCount = limits.count(in.readVInt(), 1, "tags");
+    int tagCount = limits.count(vInt(in), 1, "tags");
     List<String> names = new ArrayList<>(tagCount);
     for (int i = 0; i < tagCount; i++) {
       names.add(limits.string());
@@ -303,7 +329,7 @@ public final class ModelFile {
 
     /** A string as {@link DataOutput#writeString} writes it, its length checked before allocating. */
     String string() throws IOException {
-      int length = count(in.readVInt(), 1, "bytes of a string");
+      int length = count(vInt(in), 1, "bytes of a string");
       byte[] bytes = new byte[length];
       in.readBytes(bytes, 0, length);
       return new String(bytes, StandardCharsets.UTF_8);
@@ -311,7 +337,7 @@ public final class ModelFile {
   }
 
   private static Map<String, String> readMap(DataInput in, Limits limits) throws IOException {
-    int size = limits.count(in.readVInt(), 2, "provenance entries");
+    int size = limits.count(vInt(in), 2, "provenance entries");
     Map<String, String> map = new TreeMap<>();
     for (int i = 0; i < size; i++) {
       map.put(limits.string(), limits.string());
@@ -320,14 +346,35 @@ public final class ModelFile {
   }
 
   private static StateSpace readStates(DataInput in, Limits limits, int tagCount) throws IOException {
-    int count = limits.count(in.readVInt(), 2, "states");
+    int count = limits.count(vInt(in), 2, "states");
     int[] tagOfState = new int[count];
     byte[] flags = new byte[count];
     for (int s = 0; s < count; s++) {
-      tagOfState[s] = tagIndex(in.readVInt(), tagCount);
+      tagOfState[s] = tagIndex(vInt(in), tagCount);
       flags[s] = in.readByte();
     }
     return new StateSpace(tagCount, tagOfState, flags);
+  }
+
+  /**
+   * A vInt as {@link DataOutput#writeVInt} writes it. Read here rather than by
+   * {@link DataInput#readVInt}, since Lucene 10 no longer refuses a fifth byte carrying more than
+   * the 32nd bit, and a damaged file must be refused the same way on every Lucene version.
+   */
+  static int vInt(DataInput in) throws IOException {
+    int value = 0;
+    for (int shift = 0; shift < 28; shift += 7) {
+      byte b = in.readByte();
+      value |= (b & 0x7F) << shift;
+      if (b >= 0) {
+        return value;
+      }
+    }
+    byte last = in.readByte();
+    if ((last & 0xF0) != 0) {
+      throw new IOException("a vInt of more than 32 bits");
+    }
+    return value | (last << 28);
   }
 
   private static double[] readFloats(DataInput in, int count) throws IOException {
@@ -354,19 +401,19 @@ public final class ModelFile {
   }
 
   private static Lexicon readLexicon(DataInput in, Limits limits, int stateCount) throws IOException {
-    int words = limits.count(in.readVInt(), 4, "lexicon words");
+    int words = limits.count(vInt(in), 4, "lexicon words");
     Lexicon.Builder lexicon = new Lexicon.Builder(words);
     for (int w = 0; w < words; w++) {
       String word = limits.string();
-      int n = limits.count(in.readVInt(), 5, "states of a word");
+      int n = limits.count(vInt(in), 5, "states of a word");
       boolean contexts = in.readByte() != 0;
       lexicon.startWord(word, contexts);
       for (int k = 0; k < n; k++) {
-        lexicon.addState(tagIndex(in.readVInt(), stateCount), Float.intBitsToFloat(in.readInt()));
+        lexicon.addState(tagIndex(vInt(in), stateCount), Float.intBitsToFloat(in.readInt()));
         if (contexts) {
-          int m = limits.count(in.readVInt(), 5, "contexts of a word");
+          int m = limits.count(vInt(in), 5, "contexts of a word");
           for (int j = 0; j < m; j++) {
-            lexicon.addContext(tagIndex(in.readVInt(), stateCount + 1), Float.intBitsToFloat(in.readInt()));
+            lexicon.addContext(tagIndex(vInt(in), stateCount + 1), Float.intBitsToFloat(in.readInt()));
           }
         }
       }
@@ -378,11 +425,11 @@ public final class ModelFile {
       Lexicon lexicon, StateSpace states)
       throws IOException {
     double theta = Double.longBitsToDouble(in.readLong());
-    int maxSuffix = in.readVInt();
-    int openCount = limits.count(in.readVInt(), 1, "open tags");
+    int maxSuffix = vInt(in);
+    int openCount = limits.count(vInt(in), 1, "open tags");
     int[] open = new int[openCount];
     for (int i = 0; i < openCount; i++) {
-      open[i] = tagIndex(in.readVInt(), tagCount);
+      open[i] = tagIndex(vInt(in), tagCount);
     }
     double[] logPrior = readDoubles(in, limits.count(tagCount, 8, "tag priors"));
     double[] logPriorCapitalised = version >= VERSION_CAPITALISED_PRIORS
@@ -390,9 +437,9 @@ public final class ModelFile {
     double[] base = readDoubles(in, limits.count(openCount, 8, "open-tag probabilities"));
     int[] trieOfShape = new int[WordShape.values().length];
     for (int i = 0; i < trieOfShape.length; i++) {
-      trieOfShape[i] = in.readVInt();
+      trieOfShape[i] = vInt(in);
     }
-    int trieCount = limits.count(in.readVInt(), 1, "suffix tries");
+    int trieCount = limits.count(vInt(in), 1, "suffix tries");
     SuffixTrie[] tries = new SuffixTrie[trieCount];
     for (int i = 0; i < trieCount; i++) {
       tries[i] = readTrie(in, limits, tagCount);
@@ -403,7 +450,7 @@ public final class ModelFile {
       double[] factors = readDoubles(in, limits.count((long) tagCount * openCount, 8, "lower-case form factors"));
       cue = new LowerCaseFormCue(logStatePrior, factors, tagCount, openCount, lexicon, states);
     }
-    int maxPrefix = version >= VERSION_CAPITALISED_PRIORS ? in.readVInt() : 0;
+    int maxPrefix = version >= VERSION_CAPITALISED_PRIORS ? vInt(in) : 0;
     SuffixTrie[] prefixTries = null;
     if (maxPrefix > 0) {
       prefixTries = new SuffixTrie[] {readTrie(in, limits, tagCount), readTrie(in, limits, tagCount)};
@@ -413,7 +460,7 @@ public final class ModelFile {
   }
 
   private static SuffixTrie readTrie(DataInput in, Limits limits, int tagCount) throws IOException {
-    int nodes = limits.count(in.readVInt(), 2, "suffix nodes");
+    int nodes = limits.count(vInt(in), 2, "suffix nodes");
     if (nodes < 1) {
       throw new CorruptIndexException("a suffix trie needs a root", "model");
     }
@@ -424,16 +471,16 @@ public final class ModelFile {
     IntList chars = new IntList();
     for (int n = 0; n < nodes; n++) {
       countStart[n] = countTags.size;
-      int counts = limits.count(in.readVInt(), 2, "counts of a suffix");
+      int counts = limits.count(vInt(in), 2, "counts of a suffix");
       for (int i = 0; i < counts; i++) {
-        countTags.add(tagIndex(in.readVInt(), tagCount));
-        countValues.add(in.readVInt());
+        countTags.add(tagIndex(vInt(in), tagCount));
+        countValues.add(vInt(in));
       }
       childStart[n] = chars.size;
-      int children = limits.count(in.readVInt(), 1, "children of a suffix");
+      int children = limits.count(vInt(in), 1, "children of a suffix");
       int previous = -1;
       for (int i = 0; i < children; i++) {
-        int c = in.readVInt();
+        int c = vInt(in);
         if (c <= previous || c > Character.MAX_VALUE) {
           throw new CorruptIndexException("suffix characters out of order", "model");
         }

@@ -6,10 +6,12 @@ import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 import static org.junit.jupiter.api.Assumptions.assumeFalse;
+import static org.junit.jupiter.api.Assumptions.assumeTrue;
 
 import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.nio.file.Paths;
 import java.nio.file.attribute.FileTime;
 import java.nio.file.attribute.PosixFilePermissions;
 import java.time.Instant;
@@ -113,6 +115,59 @@ class ModelFileWriteSafetyTest {
     assertFalse(Files.exists(stale));
     assertEquals(List.of("model.wcm", "model.wcm.tmp", "model.wcm5521.tmp", "other.wcm77.tmp"), fileNames(dir));
     assertTrue(Files.exists(fresh) && Files.exists(otherTarget) && Files.exists(notATemporary));
+  }
+
+  /** A link given as the target: the file it points to is replaced, the link stays a link. */
+  @Test
+  void symbolicLinkIsWrittenThroughToItsTarget() throws IOException {
+    Path elsewhere = Files.createDirectory(dir.resolve("elsewhere"));
+    Path real = elsewhere.resolve("real.wcm");
+    Files.write(real, new byte[] {9});
+    Path link = Files.createSymbolicLink(dir.resolve("link.wcm"), Paths.get("elsewhere", "real.wcm"));
+    HmmModel other = TestModels.random(new java.util.Random(6L), 1);
+    ModelFile.write(other, link);
+    assertTrue(Files.isSymbolicLink(link));
+    assertArrayEquals(TestModels.bytes(other), Files.readAllBytes(real));
+    assertEquals(List.of("real.wcm"), fileNames(elsewhere));
+  }
+
+  /** A model kept private (rw-------) stays private when replaced; a new file gets rw-r--r--. */
+  @Test
+  void replacedFileKeepsItsPermissions() throws IOException {
+    Files.setPosixFilePermissions(target, PosixFilePermissions.fromString("rw-------"));
+    ModelFile.write(TestModels.random(new java.util.Random(7L), 1), target);
+    assertEquals("rw-------", PosixFilePermissions.toString(Files.getPosixFilePermissions(target)));
+    Path fresh = dir.resolve("fresh.wcm");
+    ModelFile.write(TestModels.small(), fresh);
+    assertEquals("rw-r--r--", PosixFilePermissions.toString(Files.getPosixFilePermissions(fresh)));
+  }
+
+  /** A device is never replaced by an ordinary file (as root, /dev/null was); checked without writing. */
+  @Test
+  void deviceIsRefusedAsTarget() {
+    Path devNull = Paths.get("/dev/null");
+    assumeTrue(Files.exists(devNull), "skipped: no /dev/null");
+    IOException e = assertThrows(IOException.class, () -> AtomicFiles.checkTarget(devNull));
+    assertEquals("/dev/null: is not an ordinary file (a device, pipe or socket); refusing to replace it", e.getMessage());
+  }
+
+  @Test
+  void namedPipeIsRefusedAndLeftInPlace() throws Exception {
+    Path fifo = dir.resolve("pipe.wcm");
+    assumeTrue(new ProcessBuilder("mkfifo", fifo.toString()).start().waitFor() == 0, "skipped: mkfifo unavailable");
+    IOException e = assertThrows(IOException.class, () -> ModelFile.write(TestModels.small(), fifo));
+    assertEquals(fifo + ": is not an ordinary file (a device, pipe or socket); refusing to replace it", e.getMessage());
+    assertTrue(Files.exists(fifo) && !Files.isRegularFile(fifo));
+    assertEquals(List.of("model.wcm", "pipe.wcm"), fileNames(dir));
+  }
+
+  /** A typo in a folder name must not create a new tree of folders. */
+  @Test
+  void missingFolderIsRefusedAndNotCreated() {
+    Path typo = dir.resolve("mdoels").resolve("en.wcm");
+    IOException e = assertThrows(IOException.class, () -> ModelFile.write(TestModels.small(), typo));
+    assertEquals(typo + ": folder " + typo.getParent() + " does not exist (folders are not created; create it first)", e.getMessage());
+    assertFalse(Files.exists(typo.getParent()));
   }
 
   private static List<String> fileNames(Path folder) throws IOException {

@@ -57,9 +57,11 @@ public final class Adaptation {
       long impossibleSentences, int lexiconWords, double heldOutAccuracy, double seconds) {
     @Override
     public String toString() {
-      return String.format(Locale.ROOT, "iteration %d: log-likelihood %.6e (gain %.3e), %d sentences, %d tokens, "
-          + "%d lexicon words, held-out accuracy %.4f, %.1f s", number, logLikelihood, relativeGain, sentences, tokens,
-          lexiconWords, heldOutAccuracy, seconds);
+      // a gain or accuracy that is not defined is left out rather than printed as NaN
+      return String.format(Locale.ROOT, "iteration %d: log-likelihood %.6e%s, %d sentences, %d tokens, %d lexicon words%s, %.1f s",
+          number, logLikelihood, Double.isNaN(relativeGain) ? "" : String.format(Locale.ROOT, " (gain %.3e)", relativeGain),
+          sentences, tokens, lexiconWords,
+          Double.isNaN(heldOutAccuracy) ? "" : String.format(Locale.ROOT, ", held-out accuracy %.4f", heldOutAccuracy), seconds);
     }
   }
 

@@ -1,5 +1,6 @@
 package org.wordclass.cli;
 
+import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
 import java.util.Locale;
@@ -64,8 +65,8 @@ final class AdaptCommand extends BaseCommand {
           + "model, once its accuracy drops.")
   Path heldOut;
 
-  @Option(names = "--held-out-tags", paramLabel = "upos|xpos", defaultValue = "upos",
-      description = "Tag column of the held-out file. Default: ${DEFAULT-VALUE}.")
+  @Option(names = "--held-out-tags", paramLabel = "upos|xpos",
+      description = "Tag column of the held-out file. Default: the column the model was trained on.")
   TagColumn heldOutTags;
 
   @Option(names = "--iterations", paramLabel = "N", defaultValue = "" + Defaults.ITERATIONS, description = "Iterations at most. Default: ${DEFAULT-VALUE}.")
@@ -89,26 +90,36 @@ final class AdaptCommand extends BaseCommand {
       description = "Unknown words seen at least N times in the text join the lexicon (0: none). Default: ${DEFAULT-VALUE}.")
   int addWordsMinCount;
 
-  @Option(names = "--threads", paramLabel = "N", description = "Worker threads. Default: all cores.")
+  @Option(names = "--threads", paramLabel = "N", description = "Worker threads, at most one per core. Default: all cores.")
   Integer threads;
 
   @Override
   public Integer call() throws Exception {
-    HmmModel start = model.load();
     AdaptationOptions options = options();
+    new CommandFiles().input("--model", model.path).countedInputs("--text", input.files)
+        .input("--index", input.index == null ? null : input.index.directory).input("--held-out", heldOut)
+        .output("--out", out).replacing("--out", "--model").check();
+    HmmModel start = model.load();
     TextSource text = input.files != null
         ? new TextFileSource(input.files, chain.chain())
         : new IndexFieldSource(input.index.directory, input.index.field, chain.chain());
-    Corpus heldOutCorpus = heldOut == null ? null : new Corpus(List.of(heldOut), CorpusFormat.guess(heldOut), heldOutTags);
+    Corpus heldOutCorpus = heldOut == null ? null : new Corpus(List.of(heldOut), CorpusFormat.guess(heldOut),
+        Provenance.scoringColumn(start, model.name(), heldOutTags, "--held-out-tags"));
     Adaptation.Result result = new Adaptation(options, listener()).adapt(start, text, heldOutCorpus);
     ModelFile.write(result.model(), out);
     out().printf(Locale.ROOT, "kept iteration %d of %d (%s); model %s%n", result.keptIteration(),
         result.iterations().size() - 1, result.stop().name().toLowerCase(Locale.ROOT).replace('_', ' '), out);
     out().flush();
+    warnIfTooBigForConfigStores(out, Files.size(out));
     return OK;
   }
 
   private AdaptationOptions options() {
+    int cores = Runtime.getRuntime().availableProcessors();
+    if (threads != null && (threads < 1 || threads > cores)) {
+      throw new ParameterException(spec.commandLine(), "--threads must be between 1 and the " + cores
+          + " cores this machine offers, not " + threads + " (more threads than cores only add cost)");
+    }
     try {
       AdaptationOptions o = AdaptationOptions.DEFAULTS.withIterations(iterations, minGain).withNewWeight(newWeight)
           .withLexiconConstraint(lexiconConstraint).withAddedWords(addWordsMinCount);

@@ -5,6 +5,7 @@ import java.util.List;
 import org.wordclass.corpus.Corpus;
 import org.wordclass.corpus.CorpusFormat;
 import org.wordclass.corpus.TagColumn;
+import org.wordclass.training.TagCounts;
 import picocli.CommandLine.Option;
 
 /** Options naming the tagged corpus files a command reads and how to read them (a mixin). */
@@ -32,7 +33,7 @@ final class CorpusOptions {
 
   /** The corpus, read with the tag column asked for or {@code fallback}. */
   Corpus open(TagColumn fallback) {
-    return new Corpus(files, format, tags(fallback));
+    return new Corpus(files, format, tags(fallback)).limitTags(TagCounts.MAX_TAGS);
   }
 
   /** The format {@code file} is read in. */

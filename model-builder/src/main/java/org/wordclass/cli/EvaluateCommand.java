@@ -3,7 +3,6 @@ package org.wordclass.cli;
 import java.io.IOException;
 import java.nio.file.Path;
 import org.wordclass.corpus.Corpus;
-import org.wordclass.corpus.TagColumn;
 import java.util.function.Consumer;
 import org.wordclass.corpus.Sentence;
 import org.wordclass.evaluation.Evaluation;
@@ -39,8 +38,10 @@ final class EvaluateCommand extends BaseCommand {
 
   @Override
   public Integer call() throws Exception {
+    new CommandFiles().input("--model", model.path).countedInputs("--corpus", corpus.files)
+        .output("--report", json).output("--html", html).output("--png", png).check();
     HmmModel loaded = model.load();
-    Corpus input = corpus.open(Provenance.tagColumn(loaded, TagColumn.UPOS));
+    Corpus input = corpus.open(Provenance.scoringColumn(loaded, model.name(), corpus.tags, "--tags"));
     Progress progress = Progress.start("evaluate", input, 1, err());
     Evaluation evaluation = new Evaluation(loaded);
     Evaluation onGoldTokens = new Evaluation(loaded);

@@ -1,5 +1,6 @@
 package org.wordclass.cli;
 
+import org.wordclass.evaluation.Figures;
 import org.wordclass.model.AtomicFiles;
 
 import java.io.IOException;
@@ -54,7 +55,7 @@ final class HtmlReport {
     row(h, "Known words", percent(r.knownAccuracy()) + " of " + r.knownTokens());
     row(h, "Unknown words", percent(r.unknownAccuracy()) + " of " + r.unknownTokens()
         + String.format(Locale.ROOT, " (%.1f%% of tokens)", 100 * r.unknownShare()));
-    row(h, "Candidate tags per token", String.format(Locale.ROOT, "%.2f", r.averageCandidatesPerToken()));
+    row(h, "Candidate tags per token", Figures.format("%.2f", r.averageCandidatesPerToken()));
     row(h, "Model order", Integer.toString(r.order()));
     h.append("</table>\n");
   }
@@ -65,10 +66,12 @@ final class HtmlReport {
 
   private static void perTag(StringBuilder h, EvaluationReport r) {
     h.append("<h2>Per tag</h2>\n<table class=\"scores per-tag\">\n")
-        .append("<tr><th>Tag</th><th>Precision</th><th>Recall</th><th>F1</th><th>Gold tokens</th></tr>\n");
+        .append("<tr><th>tag</th>");
+    EvaluationReport.TagScore.LABELS.forEach(label -> h.append("<th>").append(escape(label)).append("</th>"));
+    h.append("</tr>\n");
     for (EvaluationReport.TagScore t : r.perTag()) {
-      h.append(String.format(Locale.ROOT, "<tr><td>%s</td><td>%.4f</td><td>%.4f</td><td>%.4f</td><td>%d</td></tr>%n",
-          escape(t.tag()), t.precision(), t.recall(), t.f1(), t.support()));
+      h.append(String.format(Locale.ROOT, "<tr><td>%s</td><td>%d</td><td>%d</td><td>%.4f</td><td>%.4f</td><td>%.4f</td></tr>%n",
+          escape(t.tag()), t.goldWords(), t.taggedWords(), t.recall(), t.precision(), t.f1()));
     }
     h.append("</table>\n");
   }
@@ -95,7 +98,7 @@ final class HtmlReport {
   }
 
   private static String percent(double fraction) {
-    return Double.isNaN(fraction) ? "n/a" : String.format(Locale.ROOT, "%.2f%%", 100 * fraction);
+    return Figures.format("%.2f%%", 100 * fraction);
   }
 
   static String escape(String text) {

@@ -66,6 +66,7 @@ final class InspectCommand extends BaseCommand {
     ModelDescription d = describe(loaded, bytes);
     out().print(json ? Json.toString(d) : toText(d));
     out().flush();
+    warnIfTooBigForConfigStores(model.name(), bytes.length);
     return OK;
   }
 

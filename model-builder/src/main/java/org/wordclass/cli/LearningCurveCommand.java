@@ -11,12 +11,14 @@ import org.wordclass.corpus.CorpusFormat;
 import org.wordclass.corpus.TagColumn;
 import org.wordclass.evaluation.Evaluation;
 import org.wordclass.evaluation.EvaluationReport;
+import org.wordclass.evaluation.Figures;
 import org.wordclass.training.HmmEstimator;
 import org.wordclass.training.TagCounts;
 import org.wordclass.training.TrainingOptions;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
+import picocli.CommandLine.ParameterException;
 
 /**
  * {@code wordclass learning-curve}: trains on growing first parts of a corpus and scores each
@@ -52,14 +54,22 @@ final class LearningCurveCommand extends BaseCommand {
   @Override
   public Integer call() throws Exception {
     TrainingOptions options = training.toOptions();
+    for (int size : sizes) {
+      if (size < 1) {
+        throw new ParameterException(spec.commandLine(), "--sizes are numbers of sentences, each at least 1, not " + size);
+      }
+    }
+    new CommandFiles().countedInputs("--corpus", corpus.files).input("--eval", eval)
+        .output("--report", json).output("--png", png).check();
     Corpus train = corpus.open(TagColumn.UPOS);
     Corpus test = new Corpus(List.of(eval), corpus.format != null ? corpus.format : CorpusFormat.guess(eval), train.column());
     List<Point> points = new ArrayList<>();
     for (int size : sizes.stream().sorted().distinct().toList()) {
       Point point = point(train, test, size, options);
       points.add(point);
-      out().printf(Locale.ROOT, "%8d sentences %9d tokens  accuracy %.4f  known %.4f  unknown %.4f%n",
-          point.sentences(), point.tokens(), point.accuracy(), point.knownAccuracy(), point.unknownAccuracy());
+      out().printf(Locale.ROOT, "%8d sentences %9d tokens  accuracy %s  known %s  unknown %s%n",
+          point.sentences(), point.tokens(), Figures.format("%.4f", point.accuracy()),
+          Figures.format("%.4f", point.knownAccuracy()), Figures.format("%.4f", point.unknownAccuracy()));
       out().flush();
       if (point.sentences() < size) {
         break; // the whole corpus is used: larger sizes would repeat this point

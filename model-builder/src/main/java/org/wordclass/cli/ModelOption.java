@@ -2,12 +2,10 @@ package org.wordclass.cli;
 
 import java.io.IOException;
 import java.io.InputStream;
-import java.nio.file.Files;
 import java.nio.file.Path;
 import org.wordclass.model.DefaultModel;
 import org.wordclass.model.HmmModel;
 import org.wordclass.model.ModelFile;
-import org.wordclass.model.ModelFormatException;
 import picocli.CommandLine.Option;
 
 /** The {@code --model} option of commands that use a model, the bundled one by default (a mixin). */
@@ -36,10 +34,6 @@ final class ModelOption {
         return in.readAllBytes();
       }
     }
-    long size = Files.size(path);
-    if (size > ModelFile.MAX_FILE_BYTES) {
-      throw new ModelFormatException(path + ": " + size + " bytes is larger than any model");
-    }
-    return Files.readAllBytes(path);
+    return ModelFile.readBytes(path);
   }
 }

@@ -1,7 +1,5 @@
 package org.wordclass.cli;
 
-import org.wordclass.model.AtomicFiles;
-
 import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
@@ -41,6 +39,7 @@ final class TrainCommand extends BaseCommand {
   @Override
   public Integer call() throws Exception {
     TrainingOptions options = training.toOptions();
+    new CommandFiles().countedInputs("--corpus", corpus.files).input("--lexicon", lexicon.path).output("--out", out).check();
     Corpus input = corpus.open(TagColumn.UPOS);
     Progress progress = Progress.start("train", input, 1, err());
     TagCounts counts = TagCounts.forOptions(options);
@@ -56,6 +55,7 @@ final class TrainCommand extends BaseCommand {
     HmmModel model = lexicon.applyTo(new HmmEstimator(options).estimate(counts, provenance));
     ModelFile.write(model, out);
     printSummary(counts, model, progress.seconds());
+    warnIfTooBigForConfigStores(out, Files.size(out));
     return OK;
   }
 

@@ -45,7 +45,7 @@ final class TrainingOptionsMixin {
 
   @Option(names = "--open-class-min-share", paramLabel = "SHARE",
       description = "A tag may be given to unknown words when at least this share (0 to 1) of the words "
-          + "seen once carry it. Default: ${DEFAULT-VALUE}.")
+          + "seen once carry it; a share no tag reaches leaves the tag most of them carry. Default: ${DEFAULT-VALUE}.")
   double openClassMinShare;
 
   // the fallback value makes --shape-classes mean true and --no-shape-classes false whatever the default
@@ -98,7 +98,8 @@ final class TrainingOptionsMixin {
 
   @Option(names = "--min-tag-share", paramLabel = "SHARE",
       description = "Leave a word/tag pair out of the lexicon when fewer than this share of the word's "
-          + "training occurrences carry the tag (annotation slips in frequent words); 0 keeps all. "
+          + "training occurrences carry the tag (annotation slips in frequent words); 0 keeps all, and every "
+          + "word keeps its most frequent tag. "
           + "Default: ${DEFAULT-VALUE}.")
   double minTagShare;
 

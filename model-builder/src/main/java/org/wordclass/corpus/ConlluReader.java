@@ -3,6 +3,7 @@ package org.wordclass.corpus;
 import java.io.IOException;
 import java.nio.file.Path;
 import java.util.List;
+import java.util.regex.Pattern;
 
 /**
  * Reads CoNLL-U (https://universaldependencies.org/format.html): FORM (column 2) with UPOS
@@ -15,8 +16,15 @@ import java.util.List;
  *       {@code SpaceAfter=No} applies to its last word.
  *   <li>Empty nodes ({@code 5.1}) are skipped: they have no surface form.
  * </ul>
+ *
+ * IDs are checked as the specification defines them: word IDs are integers from 1 in ASCII
+ * digits, in order; a range N-M has N &lt; M, starts at the next word, overlaps no other range
+ * and ends within its sentence; an empty node N.M follows word N.
  */
 public final class ConlluReader extends SentenceReader {
+  private static final Pattern ASCII_DIGITS = Pattern.compile("[0-9]+");
+  private static final Pattern DECIMAL_ID = Pattern.compile("(0|[1-9][0-9]*)\\.[1-9][0-9]*");
+
   public ConlluReader(Path path, TagColumn column) throws IOException {
     super(path, column);
   }
@@ -30,6 +38,8 @@ public final class ConlluReader extends SentenceReader {
     String text = null;
     long first = 0;
     int rangeEnd = -1;
+    String rangeId = null;
+    long rangeLine = 0;
     boolean rangeSpaceAfter = true;
     int expectedId = 1;
     String line;
@@ -57,16 +67,27 @@ public final class ConlluReader extends SentenceReader {
         throw error("expected 10 tab-separated columns but found " + fields.length);
       }
       String id = fields[0];
-      if (id.indexOf('.') >= 0) {
+      int dot = id.indexOf('.');
+      if (dot >= 0) {
+        checkEmptyNode(id, dot, expectedId - 1);
         continue;
       }
       int dash = id.indexOf('-');
       if (dash >= 0) {
         int rangeStart = parseId(id.substring(0, dash));
-        rangeEnd = parseId(id.substring(dash + 1));
-        if (rangeStart != expectedId || rangeEnd < rangeStart) {
+        int end = parseId(id.substring(dash + 1));
+        if (rangeStart != expectedId) {
           throw error("multiword token range " + id + " does not start at word " + expectedId);
         }
+        if (end <= rangeStart) {
+          throw error("multiword token range " + id + " must end after it starts (N-M with N < M)");
+        }
+        if (rangeStart <= rangeEnd) {
+          throw error("multiword token range " + id + " overlaps range " + rangeId);
+        }
+        rangeEnd = end;
+        rangeId = id;
+        rangeLine = lines.lineNumber();
         rangeSpaceAfter = !fields[9].contains("SpaceAfter=No");
         multiwordTokens.add(new Sentence.MultiwordToken(rangeStart - 1, rangeEnd - 1, fields[1]));
         continue;
@@ -90,18 +111,43 @@ public final class ConlluReader extends SentenceReader {
         spaces.add(!fields[9].contains("SpaceAfter=No"));
       }
     }
+    if (rangeEnd > words.size()) {
+      throw new CorpusFormatException(fileName, rangeLine, "multiword token range " + rangeId + " ends after the last word of "
+          + "its sentence (" + (words.isEmpty() ? "none" : "word " + words.size()) + ")");
+    }
     return words.isEmpty() ? null : sentence(words, tags, text, spaces, first, multiwordTokens);
   }
 
-  private int parseId(String id) {
-    try {
-      int value = Integer.parseInt(id);
-      if (value < 1) {
-        throw error("word ID " + id + " is not positive");
-      }
-      return value;
-    } catch (NumberFormatException e) {
-      throw error("word ID '" + id + "' is not a number");
+  /** An empty node's ID is N.M (M from 1) and follows word N, or opens the sentence as 0.M. */
+  private void checkEmptyNode(String id, int dot, int lastWord) {
+    if (!DECIMAL_ID.matcher(id).matches()) {
+      throw error("empty node ID '" + id + "' is not of the form N.M (ASCII digits, M from 1, no sign or leading zero)");
     }
+    if (!id.substring(0, dot).equals(Integer.toString(lastWord))) {
+      throw error("empty node " + id + " does not follow word " + id.substring(0, dot) + " (the last word was " + lastWord + ")");
+    }
+  }
+
+  /**
+   * A word ID as the specification writes it: an integer from 1 in ASCII digits, without sign or
+   * leading zero ({@code Integer.parseInt} alone takes {@code 01}, {@code +2} and other scripts'
+   * digits).
+   */
+  private int parseId(String id) {
+    if (!ASCII_DIGITS.matcher(id).matches()) {
+      boolean number = id.codePoints().allMatch(c -> Character.isDigit(c) || c == '+' || c == '-') && !id.isEmpty();
+      throw error(number ? "word ID '" + id + "' is not written as CoNLL-U writes IDs (ASCII digits, no sign or leading zero)"
+          : "word ID '" + id + "' is not a number");
+    }
+    if (id.equals("0")) {
+      throw error("word ID 0 is not positive");
+    }
+    if (id.startsWith("0")) {
+      throw error("word ID '" + id + "' is not written as CoNLL-U writes IDs (ASCII digits, no sign or leading zero)");
+    }
+    if (id.length() > 9) {
+      throw error("word ID " + id + " is larger than any sentence");
+    }
+    return Integer.parseInt(id);
   }
 }

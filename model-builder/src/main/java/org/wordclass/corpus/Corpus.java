@@ -3,11 +3,13 @@ package org.wordclass.corpus;
 import java.io.IOException;
 import java.io.UncheckedIOException;
 import java.nio.file.Path;
+import java.util.HashSet;
 import java.util.Iterator;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.NoSuchElementException;
+import java.util.Set;
 import java.util.function.Consumer;
 
 /**
@@ -19,6 +21,7 @@ public final class Corpus implements Iterable<Sentence> {
   private final CorpusFormat format;
   private final TagColumn column;
   private final Map<String, String> sha256 = new LinkedHashMap<>();
+  private int maxTags;
   private long passBytesDone;
   private SentenceReader passReader;
 
@@ -32,6 +35,15 @@ public final class Corpus implements Iterable<Sentence> {
     this.files = List.copyOf(files);
     this.format = format;
     this.column = column;
+  }
+
+  /**
+   * Makes every pass refuse, at its line, a tag beyond the first {@code max} distinct ones: a
+   * corpus meant for training is stopped while it is read, not after it was counted.
+   */
+  public Corpus limitTags(int max) {
+    this.maxTags = max;
+    return this;
   }
 
   public List<Path> files() {
@@ -68,6 +80,7 @@ public final class Corpus implements Iterable<Sentence> {
     passBytesDone = 0;
     passReader = null;
     return new Iterator<>() {
+      private final Set<String> tagsSeen = new HashSet<>();
       private int fileIndex = -1;
       private SentenceReader reader;
 
@@ -89,6 +102,9 @@ public final class Corpus implements Iterable<Sentence> {
             Path path = files.get(fileIndex);
             reader = SentenceReader.open(path, format != null ? format : CorpusFormat.guess(path), column);
             passReader = reader;
+            if (maxTags > 0) {
+              reader.limitTags(tagsSeen, maxTags);
+            }
           }
           return true;
         } catch (IOException e) {

@@ -7,6 +7,7 @@ import java.util.ArrayList;
 import java.util.Iterator;
 import java.util.List;
 import java.util.NoSuchElementException;
+import java.util.Set;
 
 /**
  * Streams the sentences of one corpus file, one at a time, so a corpus larger than memory can be
@@ -19,6 +20,8 @@ public abstract class SentenceReader implements Iterator<Sentence>, Closeable {
   private Sentence next;
   private boolean finished;
   private long sentences;
+  private Set<String> tagsSeen;
+  private int maxTags;
 
   protected SentenceReader(Path path, TagColumn column) throws IOException {
     this.lines = new Utf8LineReader(path);
@@ -79,7 +82,19 @@ public abstract class SentenceReader implements Iterator<Sentence>, Closeable {
     if (problem != null) {
       throw error(problem);
     }
+    if (tagsSeen != null && tagsSeen.size() >= maxTags && !tagsSeen.contains(tag)) {
+      throw error("tag '" + tag + "' is one more distinct tag than the " + maxTags + " a model can hold");
+    }
+    if (tagsSeen != null) {
+      tagsSeen.add(tag);
+    }
     return tag;
+  }
+
+  /** Refuses, at its line, the first tag beyond {@code max} distinct ones in {@code seen} (shared by a corpus's files). */
+  void limitTags(Set<String> seen, int max) {
+    this.tagsSeen = seen;
+    this.maxTags = max;
   }
 
   protected Sentence sentence(List<String> words, List<String> tags, String text, List<Boolean> spaceAfter, long firstLine) {

@@ -86,16 +86,24 @@ public final class Utf8LineReader implements Closeable {
     try {
       int b;
       boolean any = false;
+      boolean carriageReturn = false;
       while ((b = in.read()) >= 0) {
         any = true;
         sawAnyByte = true;
+        if (carriageReturn && b != '\n') {
+          throw lineEndError();
+        }
         if (b == '\n') {
           break;
         }
+        carriageReturn = b == '\r';
         line.write(b);
       }
       if (!any) {
         return null;
+      }
+      if (b < 0 && carriageReturn) {
+        throw lineEndError();
       }
     } catch (IOException e) {
       throw new CorpusFormatException(name, lineNumber + 1, "cannot be read: " + e.getMessage());
@@ -115,6 +123,15 @@ public final class Utf8LineReader implements Closeable {
     } catch (CharacterCodingException e) {
       throw new CorpusFormatException(name, lineNumber, "is not valid UTF-8 (" + e.getClass().getSimpleName() + ")");
     }
+  }
+
+  /**
+   * A carriage return not followed by a line feed: lines end in LF (or CR LF), as CoNLL-U
+   * prescribes; a file with the CR-only line ends of old Mac OS would otherwise read as one line.
+   */
+  private CorpusFormatException lineEndError() {
+    return new CorpusFormatException(name, lineNumber + 1, "carriage return (CR) without a line feed; lines must end in LF "
+        + "or CR LF (convert CR-only line ends first)");
   }
 
   /** SHA-256 of the file's bytes as stored, valid once the whole file has been read. */

@@ -37,8 +37,16 @@ public record EvaluationReport(
   /** Where the scored tokens came from when they are the gold tokens themselves. */
   public static final String GOLD_TOKENS = "gold tokens";
 
-  /** Precision, recall and F1 of one tag; support is its number of gold tokens. */
-  public record TagScore(String tag, double precision, double recall, double f1, long support) {}
+  /**
+   * How one tag fared: {@code goldWords} carry it in the gold corpus, {@code taggedWords} were
+   * given it by the model; {@code recall} is the share of the gold words that were given it,
+   * {@code precision} the share of the tagged words that carry it in the gold, {@code f1} their
+   * harmonic mean. The same names head the text, JSON and HTML reports.
+   */
+  public record TagScore(String tag, long goldWords, long taggedWords, double recall, double precision, double f1) {
+    /** The header of the per-tag table in the text and HTML reports, in component order after the tag. */
+    public static final List<String> LABELS = List.of("gold words", "tagged words", "recall", "precision", "F1");
+  }
 
   /** Gold tag taken for another, and how often. */
   public record Confusion(String gold, String predicted, long count) {}
@@ -67,7 +75,7 @@ public record EvaluationReport(
       double recall = goldTotal == 0 ? 0 : (double) tp / goldTotal;
       double f1 = precision + recall == 0 ? 0 : 2 * precision * recall / (precision + recall);
       if (goldTotal > 0 || predictedTotal > 0) {
-        perTag.add(new TagScore(labels.get(t), precision, recall, f1, goldTotal));
+        perTag.add(new TagScore(labels.get(t), goldTotal, predictedTotal, recall, precision, f1));
       }
     }
     confusions.sort(Comparator.comparingLong(Confusion::count).reversed()
@@ -105,13 +113,15 @@ public record EvaluationReport(
       alignment.forEach((k, v) -> s.append(String.format(Locale.ROOT, "  %-22s %d%n", k, v)));
     }
     s.append(String.format(Locale.ROOT, "tokens           %d in %d sentences%n", tokens, sentences));
-    s.append(String.format(Locale.ROOT, "accuracy         %.4f%n", accuracy));
-    s.append(String.format(Locale.ROOT, "known words      %.4f  (%d tokens)%n", knownAccuracy, knownTokens));
-    s.append(String.format(Locale.ROOT, "unknown words    %.4f  (%d tokens, %.1f%%)%n", unknownAccuracy, unknownTokens, 100 * unknownShare));
-    s.append(String.format(Locale.ROOT, "candidates/token %.2f%n", averageCandidatesPerToken));
-    s.append(String.format(Locale.ROOT, "%nper tag          precision  recall     F1   support%n"));
+    s.append(String.format(Locale.ROOT, "accuracy         %s%n", Figures.format("%.4f", accuracy)));
+    s.append(String.format(Locale.ROOT, "known words      %s  (%d tokens)%n", Figures.format("%.4f", knownAccuracy), knownTokens));
+    s.append(String.format(Locale.ROOT, "unknown words    %s  (%d tokens, %.1f%%)%n", Figures.format("%.4f", unknownAccuracy),
+        unknownTokens, 100 * unknownShare));
+    s.append(String.format(Locale.ROOT, "candidates/token %s%n", Figures.format("%.2f", averageCandidatesPerToken)));
+    s.append(String.format(Locale.ROOT, "%nper tag         %12s %12s %9s %9s %7s%n", TagScore.LABELS.toArray()));
     for (TagScore t : perTag) {
-      s.append(String.format(Locale.ROOT, "  %-14s %8.4f %8.4f %8.4f %8d%n", t.tag(), t.precision(), t.recall(), t.f1(), t.support()));
+      s.append(String.format(Locale.ROOT, "  %-14s %12d %12d %9.4f %9.4f %7.4f%n", t.tag(), t.goldWords(), t.taggedWords(),
+          t.recall(), t.precision(), t.f1()));
     }
     s.append(String.format(Locale.ROOT, "%nmost frequent confusions (gold -> tagged)%n"));
     for (Confusion c : topConfusions.subList(0, Math.min(10, topConfusions.size()))) {

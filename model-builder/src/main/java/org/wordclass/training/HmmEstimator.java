@@ -6,6 +6,7 @@ import java.util.Collections;
 import java.util.List;
 import java.util.Map;
 import java.util.TreeMap;
+import org.apache.lucene.util.ArrayUtil;
 import org.wordclass.model.HmmModel;
 import org.wordclass.model.Lexicon;
 import org.wordclass.model.LowerCaseFormCue;
@@ -61,7 +62,12 @@ public final class HmmEstimator {
     }
     StatePlan plan = new StatePlan(counts, finalId, tagCount, options.capitalisationStates());
     int n = plan.size() + 1;
-    double[] tri = new double[n * n * n];
+    long cells = (long) n * n * n;
+    if (tagCount > TagCounts.MAX_TAGS || cells > ArrayUtil.MAX_ARRAY_LENGTH) {
+      throw new IllegalArgumentException(tagCount + " tags in " + plan.size() + " states are more than a model can hold (at most "
+          + TagCounts.MAX_TAGS + " tags)");
+    }
+    double[] tri = new double[(int) cells];
     for (Map.Entry<Long, Long> e : counts.trigrams().entrySet()) {
       long key = e.getKey();
       int a = plan.stateOfKey((int) (key >>> 32));
@@ -143,7 +149,11 @@ public final class HmmEstimator {
     return entries;
   }
 
-  /** Removes the states of tags that carry less than the minimum share of the word's occurrences. */
+  /**
+   * Removes the states of tags that carry less than the minimum share of the word's occurrences;
+   * the word's most frequent tag (each of them, on a tie) is always kept, whatever the share, so
+   * that no word is left without a tag.
+   */
   private void dropRareTags(TreeMap<Integer, Long> states, StateSpace space) {
     if (options.minTagShare() == 0) {
       return;
@@ -154,7 +164,7 @@ public final class HmmEstimator {
       perTag[space.tagOf(e.getKey())] += e.getValue();
       total += e.getValue();
     }
-    double floor = options.minTagShare() * total;
+    double floor = Math.min(options.minTagShare() * total, Arrays.stream(perTag).max().getAsLong());
     states.keySet().removeIf(state -> perTag[space.tagOf(state)] < floor);
   }
 
@@ -363,7 +373,11 @@ public final class HmmEstimator {
     return logPriors;
   }
 
-  /** Tags carried by at least the configured share of the words seen exactly once. */
+  /**
+   * Tags carried by at least the configured share of the words seen exactly once. A share no tag
+   * reaches leaves the tag (or tags, on a tie) with the most such words, so that a larger share
+   * never gives more open classes than a smaller one.
+   */
   private int[] openTags(Map<String, Map<Integer, Integer>> wordTags, int[] finalId, int tagCount) {
     long[] hapaxByTag = new long[tagCount];
     long hapaxes = 0;
@@ -376,9 +390,10 @@ public final class HmmEstimator {
         }
       }
     }
+    double floor = Math.min(options.openClassMinShare() * hapaxes, Arrays.stream(hapaxByTag).max().orElse(0));
     List<Integer> open = new ArrayList<>();
     for (int t = 0; t < tagCount; t++) {
-      if (hapaxByTag[t] > 0 && hapaxByTag[t] >= options.openClassMinShare() * hapaxes) {
+      if (hapaxByTag[t] > 0 && hapaxByTag[t] >= floor) {
         open.add(t);
       }
     }

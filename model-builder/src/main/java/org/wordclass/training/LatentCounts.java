@@ -4,6 +4,7 @@ import java.util.Arrays;
 import java.util.List;
 import java.util.Random;
 import java.util.TreeMap;
+import org.apache.lucene.util.ArrayUtil;
 import org.wordclass.decoding.Decoder;
 import org.wordclass.decoding.Lattice;
 import org.wordclass.model.StateSpace;
@@ -42,7 +43,17 @@ final class LatentCounts {
       emissions[w] = new double[wordStates[w].length];
     }
     int n = space.size() + 1;
-    this.transitions = new double[arity == 3 ? n * n * n : n * n];
+    this.transitions = new double[tableCells(n, arity)];
+  }
+
+  /** Cells of a transition table over {@code n} states (boundary included) of {@code arity} 2 or 3, refused beyond an array. */
+  static int tableCells(int n, int arity) {
+    long cells = arity == 3 ? (long) n * n * n : (long) n * n;
+    if (cells > ArrayUtil.MAX_ARRAY_LENGTH) {
+      throw new IllegalArgumentException((n - 1) + " latent states are more than a transition table can hold; "
+          + "train fewer latent rounds");
+    }
+    return (int) cells;
   }
 
   /** Empty counts over the same states and words. */

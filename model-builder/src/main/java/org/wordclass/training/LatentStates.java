@@ -149,7 +149,7 @@ public final class LatentStates {
       return new double[][] {t.logBigram(), t.logTrigram()};
     }
     double[] bigram = Transitions.ofBigrams(counts.transitions, n, settings.smoothing()).logBigram();
-    double[] trigram = new double[n * n * n];
+    double[] trigram = new double[LatentCounts.tableCells(n, 3)];
     for (int a = 0; a < n; a++) {
       System.arraycopy(bigram, 0, trigram, a * n * n, n * n);
     }

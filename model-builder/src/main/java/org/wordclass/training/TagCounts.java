@@ -23,6 +23,14 @@ public final class TagCounts {
   /** One tagged sentence, kept for training that needs more than counts. */
   public record TaggedSentence(List<String> words, List<String> tags) {}
 
+  /**
+   * Most distinct tags counted. The transition tables hold one cell per triple of states (a tag,
+   * or a tag in two capitalisation states, plus the boundary): at 256 tags that is up to 513^3,
+   * 135 million cells, about 1.6 GB while estimating; more would not fit the heap of an ordinary
+   * machine, and from 2,000 tags on the cells no longer fit a Java array.
+   */
+  public static final int MAX_TAGS = 256;
+
   private final List<TaggedSentence> kept;
   private final Map<String, Integer> tagIds = new HashMap<>();
   private final List<String> tagNames = new ArrayList<>();
@@ -94,8 +102,8 @@ public final class TagCounts {
   private int tagId(String tag) {
     Integer id = tagIds.get(tag);
     if (id == null) {
-      if (tagNames.size() >= (1 << 14) - 1) {
-        throw new IllegalArgumentException("too many distinct tags");
+      if (tagNames.size() >= MAX_TAGS) {
+        throw new IllegalArgumentException("tag '" + tag + "' is one more distinct tag than the " + MAX_TAGS + " a model can hold");
       }
       id = tagNames.size();
       tagIds.put(tag, id);

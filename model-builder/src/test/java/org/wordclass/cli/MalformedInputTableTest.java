@@ -65,6 +65,29 @@ class MalformedInputTableTest {
         conllu("word ID 0", CONLLU.replace("\n1\t", "\n0\t"), "FILE:2: word ID 0 is not positive"),
         conllu("a multiword range out of place", CONLLU.replace("\n2\t", "\n3-4\tgone\t_\t_\t_\t_\t_\t_\t_\t_\n2\t"),
             "FILE:3: multiword token range 3-4 does not start at word 2"),
+        conllu("a word ID with a leading zero", CONLLU.replace("\n2\t", "\n02\t"),
+            "FILE:3: word ID '02' is not written as CoNLL-U writes IDs (ASCII digits, no sign or leading zero)"),
+        conllu("a word ID with a plus sign", CONLLU.replace("\n2\t", "\n+2\t"),
+            "FILE:3: word ID '+2' is not written as CoNLL-U writes IDs (ASCII digits, no sign or leading zero)"),
+        conllu("a word ID in Arabic-Indic digits", CONLLU.replace("\n2\t", "\n\u0662\t"),
+            "FILE:3: word ID '\u0662' is not written as CoNLL-U writes IDs (ASCII digits, no sign or leading zero)"),
+        conllu("a multiword range 2-5 in a two-word sentence", "1\tthe\tthe\tDET\tDT\t_\t_\t_\t_\t_\n"
+                + "2-5\totters\t_\t_\t_\t_\t_\t_\t_\t_\n2\totter\totter\tNOUN\tNN\t_\t_\t_\t_\t_\n\n",
+            "FILE:2: multiword token range 2-5 ends after the last word of its sentence (word 2)"),
+        conllu("a multiword range with no words after it", CONLLU.replace(".\t_\t_\t_\t_\t_\n\n",
+                ".\t_\t_\t_\t_\t_\n5-6\tgone\t_\t_\t_\t_\t_\t_\t_\t_\n\n"),
+            "FILE:6: multiword token range 5-6 ends after the last word of its sentence (word 4)"),
+        conllu("a multiword range of one word", CONLLU.replace("\n2\t", "\n2-2\tgone\t_\t_\t_\t_\t_\t_\t_\t_\n2\t"),
+            "FILE:3: multiword token range 2-2 must end after it starts (N-M with N < M)"),
+        conllu("overlapping multiword ranges", CONLLU.replace("\n1\t", "\n1-3\tgone\t_\t_\t_\t_\t_\t_\t_\t_\n1\t")
+                .replace("\n2\t", "\n2-3\tgone\t_\t_\t_\t_\t_\t_\t_\t_\n2\t"),
+            "FILE:4: multiword token range 2-3 overlaps range 1-3"),
+        conllu("an empty node out of place", CONLLU.replace("\n2\t", "\n3.1\tgone\t_\t_\t_\t_\t_\t_\t_\t_\n2\t"),
+            "FILE:3: empty node 3.1 does not follow word 3 (the last word was 1)"),
+        conllu("an empty node ID that is not N.M", CONLLU.replace("\n2\t", "\n1.0\tgone\t_\t_\t_\t_\t_\t_\t_\t_\n2\t"),
+            "FILE:3: empty node ID '1.0' is not of the form N.M (ASCII digits, M from 1, no sign or leading zero)"),
+        conllu("CR-only line ends (old Mac OS)", CONLLU.replace("\n", "\r"),
+            "FILE:1: carriage return (CR) without a line feed; lines must end in LF or CR LF (convert CR-only line ends first)"),
         conllu("an empty FORM", CONLLU.replace("\totter\t", "\t\t"), "FILE:3: empty FORM"),
         conllu("a sentence of comments only", "# text = nothing here\n\n" + CONLLU, "FILE:2: sentence has comments but no words"),
         conllu("a file of comments only", "# sent_id = 1\n# newdoc\n", "FILE: holds no tagged sentence"),
@@ -85,6 +108,8 @@ class MalformedInputTableTest {
         row("an empty file", "empty.txt", new byte[0], "FILE: is empty"),
         plain("blank lines only", "\n\n \n\t\n", "FILE: holds no tagged sentence"),
         row("a byte that is not UTF-8", "latin1.txt", latin1(PLAIN.replace("otter", "café")), "FILE:2: is not valid UTF-8 (MalformedInputException)"),
+        plain("CR-only line ends (old Mac OS)", PLAIN.replace("\n", "\r"),
+            "FILE:1: carriage return (CR) without a line feed; lines must end in LF or CR LF (convert CR-only line ends first)"),
         plain("CoNLL-U in a plain file", CONLLU, "FILE:1: expected 2 tab-separated columns (token, tag) but found 1"));
   }
 

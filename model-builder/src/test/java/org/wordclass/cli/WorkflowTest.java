@@ -38,7 +38,7 @@ class WorkflowTest {
   static void trainOnce() throws Exception {
     trainConllu = InventedCorpus.write(dir.resolve("train.conllu"), InventedCorpus.conllu(InventedCorpus.sentences(300, 1, false)));
     evalConllu = InventedCorpus.write(dir.resolve("eval.conllu"), InventedCorpus.conllu(InventedCorpus.sentences(120, 2, true)));
-    model = dir.resolve("models/invented.wcm");
+    model = Files.createDirectories(dir.resolve("models")).resolve("invented.wcm");
     Cli.Result r = Cli.run("train", "--corpus", trainConllu.toString(), "--out", model.toString());
     assertEquals(0, r.exitCode(), r::toString);
   }
@@ -136,6 +136,7 @@ class WorkflowTest {
 
   @Test
   void evaluateWritesJsonHtmlAndPngReports() throws Exception {
+    Files.createDirectories(dir.resolve("reports"));
     Path json = dir.resolve("reports/eval.json");
     Path html = dir.resolve("reports/eval.html");
     Path png = dir.resolve("reports/eval.png");
@@ -167,6 +168,43 @@ class WorkflowTest {
     try (var files = Files.list(dir.resolve("reports"))) {
       assertEquals(3, files.count(), "no temporary file left behind");
     }
+  }
+
+  /**
+   * The per-tag table uses labels of our own, the gold count first, the same in the text, JSON
+   * and HTML reports (it used to copy a machine-learning library's column set and order down to
+   * the word "support").
+   */
+  @Test
+  void perTagTableHasTheSameOwnLabelsInTextJsonAndHtml() throws Exception {
+    Path json = dir.resolve("labels.json");
+    Path html = dir.resolve("labels.html");
+    Cli.Result r = Cli.run("evaluate", "--model", model.toString(), "--corpus", evalConllu.toString(),
+        "--report", json.toString(), "--html", html.toString());
+    assertEquals(0, r.exitCode(), r::toString);
+    String header = r.out().lines().filter(l -> l.startsWith("per tag")).findFirst().orElseThrow();
+    assertEquals(List.of("per", "tag", "gold", "words", "tagged", "words", "recall", "precision", "F1"),
+        List.of(header.trim().split(" +")));
+    JsonNode noun = JSON.readTree(json.toFile()).get("perTag").get(0);
+    List<String> keys = new java.util.ArrayList<>();
+    noun.fieldNames().forEachRemaining(keys::add);
+    assertEquals(List.of("tag", "goldWords", "taggedWords", "recall", "precision", "f1"), keys);
+    String page = Files.readString(html, StandardCharsets.UTF_8);
+    assertTrue(page.contains("<tr><th>tag</th><th>gold words</th><th>tagged words</th><th>recall</th><th>precision</th>"
+        + "<th>F1</th></tr>"), page);
+    for (String output : List.of(r.out(), Files.readString(json), page)) {
+      assertFalse(output.contains("support"), output);
+    }
+    // the figures themselves: gold words of a tag add up to the tokens, as do its tagged words
+    long gold = 0;
+    long tagged = 0;
+    for (JsonNode t : JSON.readTree(json.toFile()).get("perTag")) {
+      gold += t.get("goldWords").asLong();
+      tagged += t.get("taggedWords").asLong();
+    }
+    long tokens = JSON.readTree(json.toFile()).get("tokens").asLong();
+    assertEquals(tokens, gold);
+    assertEquals(tokens, tagged);
   }
 
   @Test

@@ -166,7 +166,7 @@ public final class AccuracyTables {
     System.out.println("| class | tokens | precision | recall | a class-restricted query misses (1 - recall) | wrong hits (1 - precision) |");
     System.out.println("| --- | ---: | ---: | ---: | ---: | ---: |");
     for (EvaluationReport.TagScore t : r.perTag()) {
-      System.out.printf(Locale.ROOT, "| %s | %d | %.3f | %.3f | %.1f%% | %.1f%% |%n", t.tag(), t.support(), t.precision(),
+      System.out.printf(Locale.ROOT, "| %s | %d | %.3f | %.3f | %.1f%% | %.1f%% |%n", t.tag(), t.goldWords(), t.precision(),
           t.recall(), 100 * (1 - t.recall()), 100 * (1 - t.precision()));
     }
   }

@@ -69,11 +69,16 @@ final class DemoSolr implements Closeable {
   /** The model the word-class filter of {@code fieldType} decodes with, in the current core. */
   HmmModel modelOf(String fieldType) {
     try (SolrCore core = container.getCore(CORE)) {
-      TokenizerChain chain = (TokenizerChain) core.getLatestSchema().getFieldTypeByName(fieldType).getIndexAnalyzer();
-      for (TokenFilterFactory factory : chain.getTokenFilterFactories()) {
-        if (factory instanceof WordClassFilterFactory) {
-          return ((WordClassFilterFactory) factory).options().model();
-        }
+      return modelOf(core, fieldType);
+    }
+  }
+
+  /** The model the word-class filter of {@code fieldType} decodes with in {@code core}. */
+  static HmmModel modelOf(SolrCore core, String fieldType) {
+    TokenizerChain chain = (TokenizerChain) core.getLatestSchema().getFieldTypeByName(fieldType).getIndexAnalyzer();
+    for (TokenFilterFactory factory : chain.getTokenFilterFactories()) {
+      if (factory instanceof WordClassFilterFactory) {
+        return ((WordClassFilterFactory) factory).options().model();
       }
     }
     throw new AssertionError(fieldType + " has no word-class filter");
