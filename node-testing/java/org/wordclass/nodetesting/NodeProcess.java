@@ -30,8 +30,8 @@ import java.util.stream.Stream;
  * <p>Both engines refuse to run as root, and CI runs as root: there the folder is handed to the
  * unprivileged user {@code nobody} and the node started through {@code runuser}. The launcher
  * script starts a separate server process; {@link #close()} stops that one by its PID, then checks
- * that it and the launcher have ended. A node costs about its heap plus 200 MB and starts in 10 to
- * 20 s on two cores.
+ * that it and the launcher have ended. Starting a node takes most of a test's time: a few tens of
+ * seconds on two cores, more under load (hence the generous start timeout).
  */
 public final class NodeProcess implements AutoCloseable, Rest {
   /** What differs between the engines' distributions. */
