@@ -1,4 +1,4 @@
-package org.wordclass.opensearch;
+package org.wordclass.nodetesting;
 
 import java.io.IOException;
 import java.io.InputStream;
@@ -12,7 +12,7 @@ import java.nio.file.Path;
  * bundled model, and a corrupted copy. The model bytes come from the analyzer jar's resource,
  * read through the class path of whoever calls (only the test, never the node under test).
  */
-final class ConfigFiles {
+public final class ConfigFiles {
   static final String MODEL_RESOURCE = "org/wordclass/models/en-ewt-upos.wcm";
 
   private ConfigFiles() {}
@@ -23,11 +23,11 @@ final class ConfigFiles {
   }
 
   /** The index settings users copy: config-examples/opensearch/index-settings.json, as it is. */
-  static String indexSettings() {
+  public static String indexSettings() {
     return read(examples().resolve("opensearch/index-settings.json"));
   }
 
-  static void install(Path configDir) throws IOException {
+  public static void install(Path configDir) throws IOException {
     Path dir = Files.createDirectories(configDir.resolve("wordclass"));
     Files.copy(examples().resolve("lucene/hiking-lexicon.txt"), dir.resolve("hiking-lexicon.txt"));
     byte[] model = bundledModel();
