@@ -1,6 +1,8 @@
 package org.wordclass.engine;
 
+import java.util.LinkedHashMap;
 import java.util.List;
+import java.util.Map;
 import org.apache.lucene.search.Query;
 import org.wordclass.analysis.PayloadEncoding;
 import org.wordclass.analysis.WordClassOptions;
@@ -24,7 +26,7 @@ import org.wordclass.query.WordClassQueries;
  * @param word the word as the index holds it (lowercased if the analyzer lowercases)
  * @param classes the word classes, any of which matches
  */
-public record ClassRestrictedQuerySpec(String field, String word, List<String> classes) {
+public record ClassRestrictedQuerySpec(String field, String word, List<String> classes) implements QuerySpec {
   /** Name engines register the query type under. */
   public static final String NAME = "word_class_term";
   /** Parameter listing the classes. */
@@ -37,12 +39,27 @@ public record ClassRestrictedQuerySpec(String field, String word, List<String> c
     classes = QueryParameters.requireNames(classes, CLASSES);
   }
 
+  @Override
+  public String name() {
+    return NAME;
+  }
+
+  @Override
+  public Map<String, Object> parameters() {
+    Map<String, Object> parameters = new LinkedHashMap<>();
+    parameters.put(QueryParameters.FIELD, field);
+    parameters.put(QueryParameters.WORD, word);
+    parameters.put(CLASSES, classes);
+    return parameters;
+  }
+
   /**
    * The Lucene query over a field indexed with {@code indexed} (see {@link IndexedClasses}).
    *
    * @throws IllegalArgumentException if the field's payloads do not name classes, or a class is
    *     not one of its model's
    */
+  @Override
   public Query toQuery(WordClassOptions indexed) {
     PayloadEncoding payload = indexed.payload();
     if (payload != PayloadEncoding.TAG && payload != PayloadEncoding.INDEX) {

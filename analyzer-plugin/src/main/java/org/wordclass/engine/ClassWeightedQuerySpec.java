@@ -2,6 +2,7 @@ package org.wordclass.engine;
 
 import java.util.LinkedHashMap;
 import java.util.Map;
+import java.util.TreeMap;
 import org.apache.lucene.search.Query;
 import org.wordclass.analysis.ClassWeights;
 import org.wordclass.analysis.PayloadEncoding;
@@ -29,7 +30,8 @@ import org.wordclass.query.WordClassQueries;
  * @param weights class name to weight; empty when not given
  * @param defaultWeight weight of classes {@code weights} does not list; null when not given
  */
-public record ClassWeightedQuerySpec(String field, String word, Map<String, Float> weights, Float defaultWeight) {
+public record ClassWeightedQuerySpec(String field, String word, Map<String, Float> weights, Float defaultWeight)
+    implements QuerySpec {
   /** Name engines register the query type under. */
   public static final String NAME = "class_weighted_term";
   /** Parameter mapping class names to weights. */
@@ -84,12 +86,33 @@ public record ClassWeightedQuerySpec(String field, String word, Map<String, Floa
     }
   }
 
+  @Override
+  public String name() {
+    return NAME;
+  }
+
+  /** Field and word, then the weights (sorted by class) and the default weight where given. */
+  @Override
+  public Map<String, Object> parameters() {
+    Map<String, Object> parameters = new LinkedHashMap<>();
+    parameters.put(QueryParameters.FIELD, field);
+    parameters.put(QueryParameters.WORD, word);
+    if (!weights.isEmpty()) {
+      parameters.put(WEIGHTS, new TreeMap<>(weights));
+    }
+    if (defaultWeight != null) {
+      parameters.put(DEFAULT_WEIGHT, defaultWeight);
+    }
+    return parameters;
+  }
+
   /**
    * The Lucene query over a field indexed with {@code indexed} (see {@link IndexedClasses}).
    *
    * @throws IllegalArgumentException if the field has no class payloads, if weights are given for
    *     a field that stores them, or a class is not one of its model's
    */
+  @Override
   public Query toQuery(WordClassOptions indexed) {
     PayloadEncoding payload = indexed.payload();
     if (payload == PayloadEncoding.NONE) {

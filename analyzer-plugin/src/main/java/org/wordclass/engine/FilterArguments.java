@@ -6,6 +6,7 @@ import java.util.List;
 import java.util.Map;
 import java.util.Set;
 import java.util.TreeMap;
+import java.util.function.Function;
 
 /**
  * Turns the settings an engine gives a token filter into the argument map of {@link
@@ -23,6 +24,32 @@ import java.util.TreeMap;
  */
 public final class FilterArguments {
   private FilterArguments() {}
+
+  /**
+   * An engine's settings as dotted keys and text values, as {@link #fromFlatSettings} takes them.
+   * Engines keep a list as one list-valued key: {@code items} gives a key's values as a list (one
+   * item for a plain value), {@code plain} its plain value, or null where the engine cannot tell a
+   * plain value from a list of one. A list becomes {@code key.0}, {@code key.1}, ...; a plain value,
+   * or a list of one item where the engine cannot tell them apart, stays one key.
+   */
+  public static Map<String, String> flatten(Iterable<String> keys, Function<String, List<String>> items,
+      Function<String, String> plain) {
+    Map<String, String> flat = new LinkedHashMap<>();
+    for (String key : keys) {
+      List<String> values = items.apply(key);
+      String value = plain.apply(key);
+      if (values.isEmpty()) {
+        flat.put(key, "");
+      } else if (values.size() == 1 && (value == null || values.get(0).equals(value.trim()))) {
+        flat.put(key, value == null ? values.get(0) : value);
+      } else {
+        for (int i = 0; i < values.size(); i++) {
+          flat.put(key + "." + i, values.get(i));
+        }
+      }
+    }
+    return flat;
+  }
 
   /**
    * The factory arguments in {@code settings}, leaving out {@code engineKeys}.

@@ -4,6 +4,7 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 
 import java.util.LinkedHashMap;
+import java.util.List;
 import java.util.Map;
 import java.util.Set;
 import org.junit.jupiter.api.Test;
@@ -47,5 +48,22 @@ class FilterArgumentsTest {
     IllegalArgumentException e = assertThrows(IllegalArgumentException.class,
         () -> FilterArguments.fromFlatSettings(flat("keepClasses", "NOUN", "keepClasses.0", "VERB"), Set.of()));
     assertEquals("'keepClasses' is given twice, as a value and as a list or object", e.getMessage());
+  }
+
+  @Test
+  void listSettingsBecomeIndexedKeysAndPlainValuesStayOneKey() {
+    Map<String, List<String>> lists = Map.of(
+        "keepClasses", List.of("NOUN", "VERB"), "order", List.of("2"), "separator", List.of());
+    Map<String, String> plain = Map.of("order", "2");
+    List<String> keys = List.of("keepClasses", "order", "separator");
+    // an engine that tells a plain value from a list of one (OpenSearch)
+    assertEquals(flat("keepClasses.0", "NOUN", "keepClasses.1", "VERB", "order", "2", "separator", ""),
+        FilterArguments.flatten(keys, lists::get, plain::get));
+    // a list of one item is a plain value to the factory where the engine cannot tell (Elasticsearch)
+    assertEquals(flat("keepClasses.0", "NOUN", "keepClasses.1", "VERB", "order", "2", "separator", ""),
+        FilterArguments.flatten(keys, lists::get, key -> null));
+    // a one-item list that is not the plain value stays a list
+    assertEquals(flat("keepClasses.0", "NOUN"),
+        FilterArguments.flatten(List.of("keepClasses"), key -> List.of("NOUN"), key -> "[NOUN]"));
   }
 }

@@ -4,15 +4,11 @@ import static org.elasticsearch.xcontent.ConstructingObjectParser.constructorArg
 
 import java.io.IOException;
 import java.util.List;
-import org.apache.lucene.search.Query;
 import org.elasticsearch.common.io.stream.StreamInput;
 import org.elasticsearch.common.io.stream.StreamOutput;
 import org.elasticsearch.xcontent.ConstructingObjectParser;
 import org.elasticsearch.xcontent.ParseField;
-import org.elasticsearch.xcontent.ToXContent;
-import org.elasticsearch.xcontent.XContentBuilder;
 import org.elasticsearch.xcontent.XContentParser;
-import org.wordclass.analysis.WordClassOptions;
 import org.wordclass.engine.ClassRestrictedQuerySpec;
 import org.wordclass.engine.QueryParameters;
 
@@ -63,30 +59,5 @@ public final class ClassRestrictedQueryBuilder extends WordClassQueryBuilder<Cla
     out.writeStringCollection(spec.classes());
     out.writeFloat(boost);
     out.writeOptionalString(queryName);
-  }
-
-  @Override
-  protected void doXContent(XContentBuilder builder, ToXContent.Params params) throws IOException {
-    builder.startObject(ClassRestrictedQuerySpec.NAME);
-    builder.field(QueryParameters.FIELD, spec.field());
-    builder.field(QueryParameters.WORD, spec.word());
-    builder.field(ClassRestrictedQuerySpec.CLASSES, spec.classes());
-    boostAndQueryNameToXContent(builder);
-    builder.endObject();
-  }
-
-  @Override
-  String field() {
-    return spec.field();
-  }
-
-  @Override
-  Query toLucene(WordClassOptions indexed) {
-    return spec.toQuery(indexed);
-  }
-
-  @Override
-  public String getWriteableName() {
-    return ClassRestrictedQuerySpec.NAME;
   }
 }

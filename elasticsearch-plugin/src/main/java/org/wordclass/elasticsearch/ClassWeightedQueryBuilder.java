@@ -6,15 +6,11 @@ import static org.elasticsearch.xcontent.ConstructingObjectParser.optionalConstr
 import java.io.IOException;
 import java.util.Map;
 import java.util.TreeMap;
-import org.apache.lucene.search.Query;
 import org.elasticsearch.common.io.stream.StreamInput;
 import org.elasticsearch.common.io.stream.StreamOutput;
 import org.elasticsearch.xcontent.ConstructingObjectParser;
 import org.elasticsearch.xcontent.ParseField;
-import org.elasticsearch.xcontent.ToXContent;
-import org.elasticsearch.xcontent.XContentBuilder;
 import org.elasticsearch.xcontent.XContentParser;
-import org.wordclass.analysis.WordClassOptions;
 import org.wordclass.engine.ClassWeightedQuerySpec;
 import org.wordclass.engine.QueryParameters;
 
@@ -64,35 +60,5 @@ public final class ClassWeightedQueryBuilder extends WordClassQueryBuilder<Class
     out.writeOptionalFloat(spec.defaultWeight());
     out.writeFloat(boost);
     out.writeOptionalString(queryName);
-  }
-
-  @Override
-  protected void doXContent(XContentBuilder builder, ToXContent.Params params) throws IOException {
-    builder.startObject(ClassWeightedQuerySpec.NAME);
-    builder.field(QueryParameters.FIELD, spec.field());
-    builder.field(QueryParameters.WORD, spec.word());
-    if (!spec.weights().isEmpty()) {
-      builder.field(ClassWeightedQuerySpec.WEIGHTS, new TreeMap<>(spec.weights()));
-    }
-    if (spec.defaultWeight() != null) {
-      builder.field(ClassWeightedQuerySpec.DEFAULT_WEIGHT, spec.defaultWeight());
-    }
-    boostAndQueryNameToXContent(builder);
-    builder.endObject();
-  }
-
-  @Override
-  String field() {
-    return spec.field();
-  }
-
-  @Override
-  Query toLucene(WordClassOptions indexed) {
-    return spec.toQuery(indexed);
-  }
-
-  @Override
-  public String getWriteableName() {
-    return ClassWeightedQuerySpec.NAME;
   }
 }

@@ -1,6 +1,9 @@
 package org.wordclass.elasticsearch;
 
 import java.io.IOException;
+import org.elasticsearch.xcontent.XContentBuilder;
+import org.elasticsearch.xcontent.ToXContent;
+import java.util.Map;
 import java.util.List;
 import org.apache.lucene.analysis.Analyzer;
 import org.apache.lucene.search.MatchNoDocsQuery;
@@ -14,6 +17,7 @@ import org.elasticsearch.index.query.QueryShardException;
 import org.elasticsearch.index.query.SearchExecutionContext;
 import org.wordclass.analysis.WordClassOptions;
 import org.wordclass.engine.IndexedClasses;
+import org.wordclass.engine.QuerySpec;
 
 /**
  * What both word-class query builders share: the parameters held as an engine-neutral spec
@@ -25,7 +29,8 @@ import org.wordclass.engine.IndexedClasses;
  * @param <QB> the concrete builder
  * @param <S> the spec record
  */
-abstract class WordClassQueryBuilder<QB extends WordClassQueryBuilder<QB, S>, S> extends AbstractQueryBuilder<QB> {
+abstract class WordClassQueryBuilder<QB extends WordClassQueryBuilder<QB, S>, S extends QuerySpec>
+    extends AbstractQueryBuilder<QB> {
   final S spec;
 
   WordClassQueryBuilder(S spec) {
@@ -33,10 +38,29 @@ abstract class WordClassQueryBuilder<QB extends WordClassQueryBuilder<QB, S>, S>
   }
 
   /** The field the spec searches. */
-  abstract String field();
+  String field() {
+    return spec.field();
+  }
 
   /** The Lucene query of the spec over a field indexed with {@code indexed}. */
-  abstract Query toLucene(WordClassOptions indexed);
+  Query toLucene(WordClassOptions indexed) {
+    return spec.toQuery(indexed);
+  }
+
+  @Override
+  public String getWriteableName() {
+    return spec.name();
+  }
+
+  @Override
+  protected void doXContent(XContentBuilder builder, ToXContent.Params params) throws IOException {
+    builder.startObject(spec.name());
+    for (Map.Entry<String, Object> parameter : spec.parameters().entrySet()) {
+      builder.field(parameter.getKey(), parameter.getValue());
+    }
+    boostAndQueryNameToXContent(builder);
+    builder.endObject();
+  }
 
   @Override
   protected Query doToQuery(SearchExecutionContext context) throws IOException {

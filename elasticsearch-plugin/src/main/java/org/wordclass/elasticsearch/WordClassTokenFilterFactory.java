@@ -1,6 +1,5 @@
 package org.wordclass.elasticsearch;
 
-import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Set;
@@ -10,6 +9,7 @@ import org.elasticsearch.env.Environment;
 import org.elasticsearch.index.analysis.AbstractTokenFilterFactory;
 import org.wordclass.analysis.WordClassFilterFactory;
 import org.wordclass.engine.EngineFilters;
+import org.wordclass.engine.FilterArguments;
 import org.wordclass.engine.WordClassFilterHolder;
 
 /**
@@ -36,20 +36,7 @@ final class WordClassTokenFilterFactory extends AbstractTokenFilterFactory imple
    * one item and a plain value mean the same to the factory, so both pass as the plain value.
    */
   private static Map<String, String> flat(Settings settings) {
-    Map<String, String> flat = new LinkedHashMap<>();
-    for (String key : settings.keySet()) {
-      List<String> items = settings.getAsList(key, List.of(), false);
-      if (items.size() == 1) {
-        flat.put(key, items.get(0));
-      } else if (items.isEmpty()) {
-        flat.put(key, "");
-      } else {
-        for (int i = 0; i < items.size(); i++) {
-          flat.put(key + "." + i, items.get(i));
-        }
-      }
-    }
-    return flat;
+    return FilterArguments.flatten(settings.keySet(), key -> settings.getAsList(key, List.of(), false), key -> null);
   }
 
   @Override

@@ -2,13 +2,9 @@ package org.wordclass.opensearch;
 
 import java.io.IOException;
 import java.util.List;
-import org.apache.lucene.search.Query;
 import org.opensearch.core.common.io.stream.StreamInput;
 import org.opensearch.core.common.io.stream.StreamOutput;
-import org.opensearch.core.xcontent.ToXContent;
-import org.opensearch.core.xcontent.XContentBuilder;
 import org.opensearch.core.xcontent.XContentParser;
-import org.wordclass.analysis.WordClassOptions;
 import org.wordclass.engine.ClassRestrictedQuerySpec;
 import org.wordclass.engine.QueryParameters;
 
@@ -60,30 +56,5 @@ public final class ClassRestrictedQueryBuilder extends WordClassQueryBuilder<Cla
     @SuppressWarnings("unchecked")
     List<String> names = (List<String>) items;
     return names;
-  }
-
-  @Override
-  protected void doXContent(XContentBuilder builder, ToXContent.Params params) throws IOException {
-    builder.startObject(ClassRestrictedQuerySpec.NAME);
-    builder.field(QueryParameters.FIELD, spec.field());
-    builder.field(QueryParameters.WORD, spec.word());
-    builder.field(ClassRestrictedQuerySpec.CLASSES, spec.classes());
-    printBoostAndQueryName(builder);
-    builder.endObject();
-  }
-
-  @Override
-  String field() {
-    return spec.field();
-  }
-
-  @Override
-  Query toLucene(WordClassOptions indexed) {
-    return spec.toQuery(indexed);
-  }
-
-  @Override
-  public String getWriteableName() {
-    return ClassRestrictedQuerySpec.NAME;
   }
 }

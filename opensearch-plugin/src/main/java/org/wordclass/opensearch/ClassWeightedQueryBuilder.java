@@ -3,13 +3,9 @@ package org.wordclass.opensearch;
 import java.io.IOException;
 import java.util.Map;
 import java.util.TreeMap;
-import org.apache.lucene.search.Query;
 import org.opensearch.core.common.io.stream.StreamInput;
 import org.opensearch.core.common.io.stream.StreamOutput;
-import org.opensearch.core.xcontent.ToXContent;
-import org.opensearch.core.xcontent.XContentBuilder;
 import org.opensearch.core.xcontent.XContentParser;
-import org.wordclass.analysis.WordClassOptions;
 import org.wordclass.engine.ClassWeightedQuerySpec;
 import org.wordclass.engine.QueryParameters;
 
@@ -58,35 +54,5 @@ public final class ClassWeightedQueryBuilder extends WordClassQueryBuilder<Class
   @SuppressWarnings("unchecked")
   private static Map<String, ?> weights(Map<?, ?> weights) {
     return (Map<String, ?>) weights;
-  }
-
-  @Override
-  protected void doXContent(XContentBuilder builder, ToXContent.Params params) throws IOException {
-    builder.startObject(ClassWeightedQuerySpec.NAME);
-    builder.field(QueryParameters.FIELD, spec.field());
-    builder.field(QueryParameters.WORD, spec.word());
-    if (!spec.weights().isEmpty()) {
-      builder.field(ClassWeightedQuerySpec.WEIGHTS, new TreeMap<>(spec.weights()));
-    }
-    if (spec.defaultWeight() != null) {
-      builder.field(ClassWeightedQuerySpec.DEFAULT_WEIGHT, spec.defaultWeight());
-    }
-    printBoostAndQueryName(builder);
-    builder.endObject();
-  }
-
-  @Override
-  String field() {
-    return spec.field();
-  }
-
-  @Override
-  Query toLucene(WordClassOptions indexed) {
-    return spec.toQuery(indexed);
-  }
-
-  @Override
-  public String getWriteableName() {
-    return ClassWeightedQuerySpec.NAME;
   }
 }

@@ -1,6 +1,8 @@
 package org.wordclass.opensearch;
 
 import java.io.IOException;
+import org.opensearch.core.xcontent.XContentBuilder;
+import org.opensearch.core.xcontent.ToXContent;
 import java.util.List;
 import java.util.Map;
 import java.util.Set;
@@ -18,6 +20,7 @@ import org.opensearch.index.query.AbstractQueryBuilder;
 import org.opensearch.index.query.QueryShardContext;
 import org.wordclass.analysis.WordClassOptions;
 import org.wordclass.engine.IndexedClasses;
+import org.wordclass.engine.QuerySpec;
 import org.wordclass.engine.QueryParameters;
 
 /**
@@ -29,7 +32,8 @@ import org.wordclass.engine.QueryParameters;
  * @param <QB> the concrete builder
  * @param <S> the spec record
  */
-abstract class WordClassQueryBuilder<QB extends WordClassQueryBuilder<QB, S>, S> extends AbstractQueryBuilder<QB> {
+abstract class WordClassQueryBuilder<QB extends WordClassQueryBuilder<QB, S>, S extends QuerySpec>
+    extends AbstractQueryBuilder<QB> {
   /** Parameters every query takes besides its own, handled by {@link AbstractQueryBuilder}. */
   private static final Set<String> STANDARD = Set.of(BOOST_FIELD.getPreferredName(), NAME_FIELD.getPreferredName());
 
@@ -46,10 +50,29 @@ abstract class WordClassQueryBuilder<QB extends WordClassQueryBuilder<QB, S>, S>
   }
 
   /** The field the spec searches. */
-  abstract String field();
+  String field() {
+    return spec.field();
+  }
 
   /** The Lucene query of the spec over a field indexed with {@code indexed}. */
-  abstract Query toLucene(WordClassOptions indexed);
+  Query toLucene(WordClassOptions indexed) {
+    return spec.toQuery(indexed);
+  }
+
+  @Override
+  public String getWriteableName() {
+    return spec.name();
+  }
+
+  @Override
+  protected void doXContent(XContentBuilder builder, ToXContent.Params params) throws IOException {
+    builder.startObject(spec.name());
+    for (Map.Entry<String, Object> parameter : spec.parameters().entrySet()) {
+      builder.field(parameter.getKey(), parameter.getValue());
+    }
+    printBoostAndQueryName(builder);
+    builder.endObject();
+  }
 
   @Override
   protected Query doToQuery(QueryShardContext context) throws IOException {

@@ -1,6 +1,5 @@
 package org.wordclass.opensearch;
 
-import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Set;
@@ -11,6 +10,7 @@ import org.opensearch.index.IndexSettings;
 import org.opensearch.index.analysis.AbstractTokenFilterFactory;
 import org.wordclass.analysis.WordClassFilterFactory;
 import org.wordclass.engine.EngineFilters;
+import org.wordclass.engine.FilterArguments;
 import org.wordclass.engine.WordClassFilterHolder;
 
 /**
@@ -35,19 +35,7 @@ final class WordClassTokenFilterFactory extends AbstractTokenFilterFactory imple
    * list-valued key, becomes {@code key.0}, {@code key.1}, ... as the engine layer expects.
    */
   private static Map<String, String> flat(Settings settings) {
-    Map<String, String> flat = new LinkedHashMap<>();
-    for (String key : settings.keySet()) {
-      List<String> items = settings.getAsList(key, List.of(), false);
-      String plain = settings.get(key);
-      if (items.isEmpty() || (items.size() == 1 && plain != null && items.get(0).equals(plain.trim()))) {
-        flat.put(key, items.isEmpty() ? "" : plain);
-      } else {
-        for (int i = 0; i < items.size(); i++) {
-          flat.put(key + "." + i, items.get(i));
-        }
-      }
-    }
-    return flat;
+    return FilterArguments.flatten(settings.keySet(), key -> settings.getAsList(key, List.of(), false), settings::get);
   }
 
   @Override
