@@ -15,11 +15,9 @@ import java.util.Map;
 import org.opensearch.client.Request;
 import org.opensearch.client.Response;
 import org.opensearch.client.ResponseException;
-import org.opensearch.common.network.NetworkModule;
 import org.opensearch.common.settings.Settings;
 import org.opensearch.plugins.Plugin;
 import org.opensearch.test.OpenSearchIntegTestCase;
-import org.opensearch.transport.Netty4Plugin;
 
 /**
  * A cluster of two data nodes in the test JVM, started by OpenSearch's own test framework with
@@ -38,7 +36,7 @@ public class ClusterRestTest extends OpenSearchIntegTestCase {
 
   @Override
   protected Collection<Class<? extends Plugin>> nodePlugins() {
-    return List.of(WordClassPlugin.class, Netty4Plugin.class);
+    return List.of(WordClassPlugin.class, NettyTransport.PLUGIN);
   }
 
   @Override
@@ -50,8 +48,7 @@ public class ClusterRestTest extends OpenSearchIntegTestCase {
   protected Settings nodeSettings(int nodeOrdinal) {
     return Settings.builder()
         .put(super.nodeSettings(nodeOrdinal))
-        .put(NetworkModule.HTTP_TYPE_KEY, Netty4Plugin.NETTY_HTTP_TRANSPORT_NAME)
-        .put(NetworkModule.TRANSPORT_TYPE_KEY, Netty4Plugin.NETTY_TRANSPORT_NAME)
+        .put(NettyTransport.settings())
         .build();
   }
 
