@@ -1,7 +1,5 @@
 package org.wordclass.opensearch;
 
-import org.opensearch.common.network.NetworkModule;
-import org.opensearch.common.settings.Settings;
 import org.opensearch.plugins.Plugin;
 import org.opensearch.transport.Netty4ModulePlugin;
 
@@ -10,16 +8,10 @@ import org.opensearch.transport.Netty4ModulePlugin;
  * line: the netty4 transport plugin is {@code Netty4ModulePlugin} in 3.x.
  */
 final class NettyTransport {
-  /** The plugin that brings the real HTTP and transport layer. */
+  /** The plugin that brings the real HTTP and transport layer, and the names it registers them under. */
   static final Class<? extends Plugin> PLUGIN = Netty4ModulePlugin.class;
+  static final String HTTP = Netty4ModulePlugin.NETTY_HTTP_TRANSPORT_NAME;
+  static final String TRANSPORT = Netty4ModulePlugin.NETTY_TRANSPORT_NAME;
 
   private NettyTransport() {}
-
-  /** Node settings that choose netty4 for HTTP and for the transport between nodes. */
-  static Settings settings() {
-    return Settings.builder()
-        .put(NetworkModule.HTTP_TYPE_KEY, Netty4ModulePlugin.NETTY_HTTP_TRANSPORT_NAME)
-        .put(NetworkModule.TRANSPORT_TYPE_KEY, Netty4ModulePlugin.NETTY_TRANSPORT_NAME)
-        .build();
-  }
 }

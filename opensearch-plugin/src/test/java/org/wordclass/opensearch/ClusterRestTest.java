@@ -15,6 +15,7 @@ import java.util.Map;
 import org.opensearch.client.Request;
 import org.opensearch.client.Response;
 import org.opensearch.client.ResponseException;
+import org.opensearch.common.network.NetworkModule;
 import org.opensearch.common.settings.Settings;
 import org.opensearch.plugins.Plugin;
 import org.opensearch.test.OpenSearchIntegTestCase;
@@ -48,7 +49,8 @@ public class ClusterRestTest extends OpenSearchIntegTestCase {
   protected Settings nodeSettings(int nodeOrdinal) {
     return Settings.builder()
         .put(super.nodeSettings(nodeOrdinal))
-        .put(NettyTransport.settings())
+        .put(NetworkModule.HTTP_TYPE_KEY, NettyTransport.HTTP)
+        .put(NetworkModule.TRANSPORT_TYPE_KEY, NettyTransport.TRANSPORT)
         .build();
   }
 
