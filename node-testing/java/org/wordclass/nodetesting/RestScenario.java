@@ -166,8 +166,8 @@ public final class RestScenario {
     if (unreadableModel != null) {
       assertIndexRefused("{\"type\":\"wordClass\",\"model\":\"" + unreadableModel + "\"}", prefix, "'model'", "may not read");
     }
-    // a model named explicitly works like the bundled one
-    ok("PUT", "/named-model", "{\"settings\":{\"analysis\":{\"filter\":{\"f\":{\"type\":\"wordClass\",\"model\":\"wordclass/en.wcm\"}}}}}");
+    // a model named explicitly works like the bundled one (one shard: a test cluster's template would spread ten)
+    ok("PUT", "/named-model", "{\"settings\":{\"index\":{\"number_of_shards\":1,\"number_of_replicas\":0},\"analysis\":{\"filter\":{\"f\":{\"type\":\"wordClass\",\"model\":\"wordclass/en.wcm\"}}}}}");
     ok("DELETE", "/named-model", null);
   }
 

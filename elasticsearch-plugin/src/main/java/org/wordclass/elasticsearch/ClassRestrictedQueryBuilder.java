@@ -47,9 +47,7 @@ public final class ClassRestrictedQueryBuilder extends WordClassQueryBuilder<Cla
 
   /** Reads the query as another node wrote it. */
   public ClassRestrictedQueryBuilder(StreamInput in) throws IOException {
-    super(new ClassRestrictedQuerySpec(in.readString(), in.readString(), in.readStringCollectionAsList()));
-    boost(in.readFloat());
-    queryName(in.readOptionalString());
+    super(in, spec -> new ClassRestrictedQuerySpec(spec.readString(), spec.readString(), spec.readStringCollectionAsList()));
   }
 
   @Override
@@ -57,7 +55,5 @@ public final class ClassRestrictedQueryBuilder extends WordClassQueryBuilder<Cla
     out.writeString(spec.field());
     out.writeString(spec.word());
     out.writeStringCollection(spec.classes());
-    out.writeFloat(boost);
-    out.writeOptionalString(queryName);
   }
 }

@@ -47,9 +47,8 @@ public final class ClassWeightedQueryBuilder extends WordClassQueryBuilder<Class
 
   /** Reads the query as another node wrote it. */
   public ClassWeightedQueryBuilder(StreamInput in) throws IOException {
-    super(new ClassWeightedQuerySpec(in.readString(), in.readString(), in.readMap(StreamInput::readFloat), in.readOptionalFloat()));
-    boost(in.readFloat());
-    queryName(in.readOptionalString());
+    super(in, spec -> new ClassWeightedQuerySpec(spec.readString(), spec.readString(), spec.readMap(StreamInput::readFloat),
+        spec.readOptionalFloat()));
   }
 
   @Override
@@ -58,7 +57,5 @@ public final class ClassWeightedQueryBuilder extends WordClassQueryBuilder<Class
     out.writeString(spec.word());
     out.writeMap(new TreeMap<>(spec.weights()), StreamOutput::writeFloat);
     out.writeOptionalFloat(spec.defaultWeight());
-    out.writeFloat(boost);
-    out.writeOptionalString(queryName);
   }
 }

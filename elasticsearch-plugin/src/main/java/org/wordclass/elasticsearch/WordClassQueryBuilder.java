@@ -1,6 +1,7 @@
 package org.wordclass.elasticsearch;
 
 import java.io.IOException;
+import org.elasticsearch.common.io.stream.StreamInput;
 import org.elasticsearch.xcontent.XContentBuilder;
 import org.elasticsearch.xcontent.ToXContent;
 import java.util.Map;
@@ -35,6 +36,21 @@ abstract class WordClassQueryBuilder<QB extends WordClassQueryBuilder<QB, S>, S 
 
   WordClassQueryBuilder(S spec) {
     this.spec = spec;
+  }
+
+  /**
+   * Reads the query as another node wrote it: boost and name first ({@link
+   * AbstractQueryBuilder#writeTo} writes them before {@link #doWriteTo}), then the spec.
+   */
+  WordClassQueryBuilder(StreamInput in, SpecReader<S> reader) throws IOException {
+    super(in);
+    this.spec = reader.read(in);
+  }
+
+  /** Reads a spec as {@link #doWriteTo} wrote it. */
+  @FunctionalInterface
+  interface SpecReader<S> {
+    S read(StreamInput in) throws IOException;
   }
 
   /** The field the spec searches. */

@@ -26,7 +26,7 @@ public final class ClassRestrictedQueryBuilder extends WordClassQueryBuilder<Cla
 
   /** Reads the query as another node wrote it. */
   public ClassRestrictedQueryBuilder(StreamInput in) throws IOException {
-    super(new ClassRestrictedQuerySpec(in.readString(), in.readString(), in.readStringList()));
+    super(in, spec -> new ClassRestrictedQuerySpec(spec.readString(), spec.readString(), spec.readStringList()));
   }
 
   @Override

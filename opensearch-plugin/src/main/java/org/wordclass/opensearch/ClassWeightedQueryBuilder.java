@@ -27,8 +27,8 @@ public final class ClassWeightedQueryBuilder extends WordClassQueryBuilder<Class
 
   /** Reads the query as another node wrote it. */
   public ClassWeightedQueryBuilder(StreamInput in) throws IOException {
-    super(new ClassWeightedQuerySpec(in.readString(), in.readString(), in.readMap(StreamInput::readString, StreamInput::readFloat),
-        in.readOptionalFloat()));
+    super(in, spec -> new ClassWeightedQuerySpec(spec.readString(), spec.readString(),
+        spec.readMap(StreamInput::readString, StreamInput::readFloat), spec.readOptionalFloat()));
   }
 
   @Override

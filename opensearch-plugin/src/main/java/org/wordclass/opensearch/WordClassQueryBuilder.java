@@ -11,6 +11,7 @@ import org.apache.lucene.analysis.Analyzer;
 import org.apache.lucene.search.MatchNoDocsQuery;
 import org.apache.lucene.search.Query;
 import org.opensearch.core.common.ParsingException;
+import org.opensearch.core.common.io.stream.StreamInput;
 import org.opensearch.core.xcontent.XContentLocation;
 import org.opensearch.core.xcontent.XContentParser;
 import org.opensearch.index.analysis.CustomAnalyzer;
@@ -47,6 +48,15 @@ abstract class WordClassQueryBuilder<QB extends WordClassQueryBuilder<QB, S>, S 
     this(spec);
     boost(boost);
     queryName(queryName);
+  }
+
+  /**
+   * Reads the query as another node wrote it: boost and name first ({@link
+   * AbstractQueryBuilder#writeTo} writes them before {@link #doWriteTo}), then the spec.
+   */
+  WordClassQueryBuilder(StreamInput in, SpecReader<S> reader) throws IOException {
+    super(in);
+    this.spec = reader.read(in);
   }
 
   /** The field the spec searches. */
@@ -162,5 +172,11 @@ abstract class WordClassQueryBuilder<QB extends WordClassQueryBuilder<QB, S>, S 
   @FunctionalInterface
   interface SpecMaker<S> {
     S make(Body body);
+  }
+
+  /** Reads a spec as {@link #doWriteTo} wrote it. */
+  @FunctionalInterface
+  interface SpecReader<S> {
+    S read(StreamInput in) throws IOException;
   }
 }
