@@ -57,18 +57,30 @@ public final class RestScenario {
     assertEquals(indexed.text, Boolean.FALSE, indexed.at("errors"));
   }
 
-  /** _analyze shows each token's class as its type, and with explain our attribute with class and confidence. */
-  public void analyzeShowsClasses() throws IOException {
-    Rest.Response plain = ok("POST", "/" + INDEX + "/_analyze", "{\"analyzer\":\"trip_tagged\",\"text\":\"Ford the stream\"}");
+  /** The terms and types _analyze gives {@code text} through the example's {@code trip_tagged} analyzer. */
+  private List<List<String>> analyzed(String text) throws IOException {
+    Rest.Response plain = ok("POST", "/" + INDEX + "/_analyze", "{\"analyzer\":\"trip_tagged\",\"text\":\"" + text + "\"}");
     List<String> terms = new ArrayList<>();
     List<String> types = new ArrayList<>();
     for (Object token : (List<?>) plain.at("tokens")) {
       terms.add((String) ((Map<?, ?>) token).get("token"));
       types.add((String) ((Map<?, ?>) token).get("type"));
     }
+    return List.of(terms, types);
+  }
+
+  /**
+   * _analyze shows each token's class as its type, and with explain our attribute with class and
+   * confidence; running text of two sentences goes through the sentenceStandard tokenizer.
+   */
+  public void analyzeShowsClasses() throws IOException {
     // each word, then its qualified term at the same position, lowercased after tagging
-    assertEquals(List.of("ford", "ford_verb", "the", "the_det", "stream", "stream_noun"), terms);
-    assertEquals(List.of("VERB", "VERB", "DET", "DET", "NOUN", "NOUN"), types);
+    assertEquals(List.of(List.of("ford", "ford_verb", "the", "the_det", "stream", "stream_noun"),
+        List.of("VERB", "VERB", "DET", "DET", "NOUN", "NOUN")), analyzed("Ford the stream"));
+    // notes p2 and p4 as one field value of two sentences: each "park" keeps the class it has alone
+    List<String> terms = analyzed("The shop sits next to the park. You can park here.").get(0);
+    assertEquals(terms.toString(), List.of("park_noun", "park_verb"),
+        terms.stream().filter(term -> term.startsWith("park_")).toList());
 
     Rest.Response explained = ok("POST", "/" + INDEX + "/_analyze",
         "{\"analyzer\":\"trip_tagged\",\"text\":\"You can park here\",\"explain\":true,\"attributes\":[\"wordClass\",\"confidence\"]}");
@@ -166,6 +178,9 @@ public final class RestScenario {
     if (unreadableModel != null) {
       assertIndexRefused("{\"type\":\"wordClass\",\"model\":\"" + unreadableModel + "\"}", prefix, "'model'", "may not read");
     }
+    assertRefused("PUT", "/refused", "{\"settings\":{\"analysis\":{\"tokenizer\":{\"t\":{\"type\":\"sentenceStandard\","
+        + "\"maxTokenLength\":0}},\"analyzer\":{\"a\":{\"type\":\"custom\",\"tokenizer\":\"t\"}}}}}",
+        "the sentenceStandard tokenizer [t] cannot be used", "maxTokenLength");
     // a model named explicitly works like the bundled one (one shard: a test cluster's template would spread ten)
     ok("PUT", "/named-model", "{\"settings\":{\"index\":{\"number_of_shards\":1,\"number_of_replicas\":0},\"analysis\":{\"filter\":{\"f\":{\"type\":\"wordClass\",\"model\":\"wordclass/en.wcm\"}}}}}");
     ok("DELETE", "/named-model", null);

@@ -28,7 +28,12 @@ public class SentenceStandardTokenizerFactory extends TokenizerFactory {
 
   public SentenceStandardTokenizerFactory(Map<String, String> args) {
     super(args);
-    maxTokenLength = getInt(args, "maxTokenLength", StandardAnalyzer.DEFAULT_MAX_TOKEN_LENGTH);
+    String given = args.get("maxTokenLength");
+    try {
+      maxTokenLength = getInt(args, "maxTokenLength", StandardAnalyzer.DEFAULT_MAX_TOKEN_LENGTH);
+    } catch (NumberFormatException e) {
+      throw new IllegalArgumentException("maxTokenLength must be a whole number, not '" + given + "'", e);
+    }
     if (maxTokenLength < 1 || maxTokenLength > 1024 * 1024) {
       throw new IllegalArgumentException("maxTokenLength must be between 1 and 1048576, not " + maxTokenLength);
     }

@@ -7,10 +7,12 @@ import java.util.LinkedHashMap;
 import java.util.Map;
 import java.util.Set;
 import org.apache.lucene.util.ResourceLoader;
+import org.wordclass.analysis.SentenceStandardTokenizerFactory;
 import org.wordclass.analysis.WordClassFilterFactory;
 
 /**
- * Makes a ready {@link WordClassFilterFactory} from the settings an engine gives a token filter:
+ * Makes a ready {@link WordClassFilterFactory} from the settings an engine gives a token filter
+ * (and a {@link SentenceStandardTokenizerFactory} from a tokenizer's settings):
  * the settings become the factory's arguments ({@link FilterArguments}), the factory checks them
  * (it is the one parser of its arguments, so unknown and new arguments are its business), and is
  * informed through a {@link ConfigDirResourceLoader} on the node's configuration directory, which
@@ -62,8 +64,28 @@ public final class EngineFilters {
     }
   }
 
+  /**
+   * The {@value SentenceStandardTokenizerFactory#NAME} tokenizer named {@code tokenizerName} with
+   * engine settings {@code settings}, minus the engine's own keys {@code engineKeys}. The Lucene
+   * factory checks the arguments, so the engines accept exactly what Lucene and Solr accept.
+   *
+   * @throws IllegalArgumentException naming the tokenizer, the argument and the reason
+   */
+  public static SentenceStandardTokenizerFactory sentenceTokenizer(String tokenizerName, Map<String, String> settings,
+      Set<String> engineKeys) {
+    try {
+      return new SentenceStandardTokenizerFactory(
+          new LinkedHashMap<>(FilterArguments.fromFlatSettings(settings, engineKeys)));
+    } catch (IllegalArgumentException e) {
+      throw refused(SentenceStandardTokenizerFactory.NAME + " tokenizer", tokenizerName, e.getMessage(), e);
+    }
+  }
+
   private static IllegalArgumentException refused(String filterName, String reason, Exception cause) {
-    return new IllegalArgumentException(
-        "the " + WordClassFilterFactory.NAME + " filter [" + filterName + "] cannot be used: " + reason, cause);
+    return refused(WordClassFilterFactory.NAME + " filter", filterName, reason, cause);
+  }
+
+  private static IllegalArgumentException refused(String kind, String name, String reason, Exception cause) {
+    return new IllegalArgumentException("the " + kind + " [" + name + "] cannot be used: " + reason, cause);
   }
 }

@@ -118,4 +118,24 @@ class EngineFiltersTest {
     Files.setPosixFilePermissions(config.resolve("wordclass/en.wcm"), PosixFilePermissions.fromString("---------"));
     assertMentions(refusal("model", "wordclass/en.wcm"), "'model'", "wordclass/en.wcm", "may not read");
   }
+
+  @Test
+  void theSentenceTokenizerTakesTheLuceneFactorysArgumentsAndRefusesOthers() throws IOException {
+    var factory = EngineFilters.sentenceTokenizer("sentences", Map.of("type", "sentenceStandard", "maxTokenLength", "5"),
+        Set.of("type"));
+    try (var tokenizer = factory.create()) {
+      tokenizer.setReader(new java.io.StringReader("Ferries depart hourly."));
+      var term = tokenizer.addAttribute(org.apache.lucene.analysis.tokenattributes.CharTermAttribute.class);
+      tokenizer.reset();
+      assertTrue(tokenizer.incrementToken());
+      assertEquals("Ferri", term.toString(), "tokens longer than maxTokenLength are split, as the standard tokenizer does");
+    }
+    for (Map<String, String> bad : java.util.List.of(Map.of("maxTokenLength", "0"), Map.of("maxTokenLength", "five"),
+        Map.of("language", "en"))) {
+      String message = assertThrows(IllegalArgumentException.class,
+          () -> EngineFilters.sentenceTokenizer("sentences", bad, Set.of("type"))).getMessage();
+      assertTrue(message.startsWith("the sentenceStandard tokenizer [sentences] cannot be used: "), message);
+      assertMentions(message, bad.keySet().iterator().next());
+    }
+  }
 }

@@ -21,7 +21,7 @@ import org.wordclass.engine.WordClassFilterHolder;
  */
 final class WordClassTokenFilterFactory extends AbstractTokenFilterFactory implements WordClassFilterHolder {
   /** Settings Elasticsearch itself reads from a filter definition. */
-  private static final Set<String> ENGINE_KEYS = Set.of("type");
+  static final Set<String> ENGINE_KEYS = Set.of("type");
 
   private final WordClassFilterFactory factory;
 
@@ -35,7 +35,7 @@ final class WordClassTokenFilterFactory extends AbstractTokenFilterFactory imple
    * key, which becomes {@code key.0}, {@code key.1}, ... as the engine layer expects; a list of
    * one item and a plain value mean the same to the factory, so both pass as the plain value.
    */
-  private static Map<String, String> flat(Settings settings) {
+  static Map<String, String> flat(Settings settings) {
     return FilterArguments.flatten(settings.keySet(), key -> settings.getAsList(key, List.of(), false), key -> null);
   }
 

@@ -21,7 +21,7 @@ import org.wordclass.engine.WordClassFilterHolder;
  */
 final class WordClassTokenFilterFactory extends AbstractTokenFilterFactory implements WordClassFilterHolder {
   /** Settings OpenSearch itself reads from a filter definition. */
-  private static final Set<String> ENGINE_KEYS = Set.of("type");
+  static final Set<String> ENGINE_KEYS = Set.of("type");
 
   private final WordClassFilterFactory factory;
 
@@ -34,7 +34,7 @@ final class WordClassTokenFilterFactory extends AbstractTokenFilterFactory imple
    * The settings as dotted keys and text values; a list setting, which OpenSearch keeps as one
    * list-valued key, becomes {@code key.0}, {@code key.1}, ... as the engine layer expects.
    */
-  private static Map<String, String> flat(Settings settings) {
+  static Map<String, String> flat(Settings settings) {
     return FilterArguments.flatten(settings.keySet(), key -> settings.getAsList(key, List.of(), false), settings::get);
   }
 
