@@ -14,6 +14,7 @@ import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import org.wordclass.model.DefaultModel;
+import org.wordclass.model.ShippedModels;
 
 /**
  * {@code train}, {@code adapt} and {@code inspect} say in one line when a model file is too big to
@@ -101,5 +102,21 @@ class ConfigStoreWarningTest {
     assertTrue(size < BaseCommand.CONFIG_STORE_LIMIT_BYTES, "bundled model: " + size + " bytes");
     Cli.Result r = ok("inspect");
     assertFalse(r.err().contains("warning"), r::toString);
+  }
+
+  /**
+   * Every model of the language pack fits a config set too, and docs/solr.md gives each one's
+   * size as it is, so a rebuilt pack with stale figures in the docs fails here.
+   */
+  @Test
+  void everyShippedModelStaysUnderTheLimitWithItsSizeInTheDocs() throws Exception {
+    String docs = Files.readString(Path.of("..", "docs", "solr.md"), StandardCharsets.UTF_8);
+    for (var shipped : ShippedModels.resources().entrySet()) {
+      long size = ShippedModels.readBytes(shipped.getKey()).length;
+      assertTrue(size < BaseCommand.CONFIG_STORE_LIMIT_BYTES, shipped + ": " + size + " bytes");
+      String file = shipped.getValue().substring(ShippedModels.FOLDER.length());
+      String sizeCells = String.format(Locale.ROOT, "| `%s` | %,d | %,d bytes", file, size, BaseCommand.CONFIG_STORE_LIMIT_BYTES - size);
+      assertTrue(docs.contains(sizeCells), () -> "docs/solr.md lacks the row of " + file + ": " + sizeCells);
+    }
   }
 }
