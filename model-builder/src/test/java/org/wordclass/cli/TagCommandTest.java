@@ -110,6 +110,11 @@ class TagCommandTest {
     assertEquals("NOUN", classOf(lines, "table"));
     assertEquals("ADP", classOf(lines, "for"));
     assertEquals("NUM", classOf(lines, "two"));
+    // with a chain that keeps punctuation, the comma and the full stop are PUNCT (UD guidelines)
+    List<Line> kept = tokens(Cli.run("tag", "--tokenizer", "pattern:pattern=\\w+|[^\\w\\s],group=0", "Book a table for two, please."));
+    assertEquals(List.of("Book", "a", "table", "for", "two", ",", "please", "."), kept.stream().map(Line::token).toList());
+    assertEquals("PUNCT", classOf(kept, ","));
+    assertEquals("PUNCT", classOf(kept, "."));
   }
 
   /** Offsets are the standard tokenizer's (Lucene's StandardTokenizer run here on the same text), relative to the whole input. */
