@@ -96,6 +96,7 @@ final class TagCommand extends BaseCommand {
     if (file != null && text != null && !text.isEmpty()) {
       throw new ParameterException(spec.commandLine(), "give the text as arguments or with --text FILE, not both");
     }
+    chain.chain(); // a chain Lucene cannot build is refused before any file is read
     new CommandFiles().input("--model", model.path).input("--lexicon", lexicon.path).input("--text", file).check();
     HmmModel loaded = lexicon.applyTo(loadModel());
     boolean explained = explain || json;

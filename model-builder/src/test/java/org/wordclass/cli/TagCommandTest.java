@@ -258,6 +258,21 @@ class TagCommandTest {
     assertTrue(both.err().startsWith("wordclass tag: --model and --language cannot both be given"), both::toString);
   }
 
+  /** A component Lucene does not know, or an argument it refuses, is a mistake on the command line, not an internal error. */
+  @Test
+  void aChainLuceneCannotBuildIsRefusedAsAMistake() throws IOException {
+    Path corpus = Files.writeString(dir.resolve("c.conllu"), "# text = Hi\n1\tHi\thi\tINTJ\t_\t_\t_\t_\t_\t_\n\n");
+    List<List<String>> commands = List.of(List.of("tag", "--tokenizer", "nosuch", "word"), List.of("tag", "--filter", "stop:bogus=1", "word"),
+        List.of("tag", "--filter", "stop:ignoreCase", "word"),
+        List.of("evaluate", "--corpus", corpus.toString(), "--through-analyzer", "--tokenizer", "nosuch"));
+    for (List<String> args : commands) {
+      Cli.Result r = Cli.run(args.toArray(String[]::new));
+      assertEquals(2, r.exitCode(), r::toString);
+      assertTrue(r.err().lines().anyMatch(l -> l.startsWith("wordclass " + args.get(0) + ": --tokenizer/--filter: ")), r::toString);
+      assertFalse(r.err().contains("internal error"), r::toString);
+    }
+  }
+
   @Test
   void filtersBeforeTheWordClassFilterAreRun() {
     List<Line> lines = tokens(Cli.run("tag", "--filter", "lowercase", "--no-confidence", "BOOK a Table"));
