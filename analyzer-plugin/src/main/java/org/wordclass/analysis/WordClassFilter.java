@@ -15,10 +15,12 @@ import org.apache.lucene.util.AttributeImpl;
 import org.apache.lucene.util.AttributeSource;
 import org.apache.lucene.util.BytesRef;
 import org.apache.lucene.util.BytesRefBuilder;
+import org.wordclass.decoding.CandidateSource;
 import org.wordclass.decoding.Decoder;
 import org.wordclass.decoding.Lattice;
 import org.wordclass.model.HmmModel;
 import org.wordclass.model.TagSet;
+import org.wordclass.model.WordShape;
 
 /**
  * Tags each token with its word class (part of speech), decoded by a hidden Markov model over the
@@ -32,7 +34,10 @@ import org.wordclass.model.TagSet;
  *       org.apache.lucene.analysis.core.TypeTokenFilter}) work after this one unchanged;
  *   <li>the {@link WordClassAttribute}, with the class index and, if asked for, the confidence;
  *   <li>the payload, in the chosen {@link PayloadEncoding} (which replaces any upstream payload;
- *       with {@link PayloadEncoding#NONE} the upstream payload is kept).
+ *       with {@link PayloadEncoding#NONE} the upstream payload is kept);
+ *   <li>if asked for ({@link WordClassOptions#explain()}), the {@link
+ *       WordClassExplanationAttribute}: how the candidate classes were chosen and every class's
+ *       probability, from this very decoding, so that a tool shows what the index gets.
  * </ul>
  *
  * With qualified terms on, every token is followed by a second one at the same position (position
@@ -83,6 +88,10 @@ public final class WordClassFilter extends TokenFilter {
   private final WordClassAttribute classAtt = addAttribute(WordClassAttribute.class);
   private final KeywordAttribute keywordAtt;
   private final PayloadAttribute payloadAtt;
+  /** Null unless explanations are asked for, so that indexing pays one branch per token for them. */
+  private final WordClassExplanationAttribute explanationAtt;
+  /** Whether decoding runs forward-backward: for confidences or explanations. */
+  private final boolean posteriors;
 
   private final WordClassOptions options;
   private final TagSet tags;
@@ -129,6 +138,8 @@ public final class WordClassFilter extends TokenFilter {
     this.payloads = options.payload().encodeAll(tags, options.weights());
     this.payloadAtt = options.payload() == PayloadEncoding.NONE ? null : addAttribute(PayloadAttribute.class);
     this.keywordAtt = options.qualifiedTerms() ? addAttribute(KeywordAttribute.class) : null;
+    this.explanationAtt = options.explain() ? addAttribute(WordClassExplanationAttribute.class) : null;
+    this.posteriors = options.confidence() || options.explain();
   }
 
   @Override
@@ -190,7 +201,7 @@ public final class WordClassFilter extends TokenFilter {
     }
     best = Decoder.ensureCapacity(best, size);
     decoder.viterbi(best);
-    if (options.confidence()) {
+    if (posteriors) {
       decoder.forwardBackward();
     }
   }
@@ -212,6 +223,24 @@ public final class WordClassFilter extends TokenFilter {
       payload.copyBytes(payloads[tag]);
       payloadAtt.setPayload(payload.get());
     }
+    if (explanationAtt != null) {
+      explain(i);
+    }
+  }
+
+  /** Fills the explanation of token {@code i}, whose term is restored in {@link #termAtt}. */
+  private void explain(int i) {
+    CandidateSource source = lattice.source(i);
+    char[] term = termAtt.buffer();
+    int length = termAtt.length();
+    if (source == CandidateSource.UNKNOWN) {
+      int ending = lattice.matchedEndingLength(i);
+      explanationAtt.setSource(source, null, new String(term, length - ending, ending), WordShape.classify(term, 0, length));
+    } else {
+      String lookedUpAs = source == CandidateSource.LOWERCASED_FIRST_WORD ? Lattice.lowerCasedForm(term, 0, length) : null;
+      explanationAtt.setSource(source, lookedUpAs, null, null);
+    }
+    decoder.tagPosteriors(i, explanationAtt.classProbabilities(tags.size()));
   }
 
   /** Restores token {@code i} again (downstream filters may have changed it) as its qualified twin. */

@@ -18,6 +18,9 @@ import org.wordclass.model.HmmModel;
  * @param qualifiedTerms whether to add {@code word + separator + CLASS} at each position
  * @param separator joins word and class in qualified terms
  * @param maxWindow most tokens buffered and decoded together; a longer sentence is cut
+ * @param explain whether to say in a {@link WordClassExplanationAttribute} why each token got its
+ *     class, for tools; costs what {@code confidence} costs plus a tag-set-sized array copy and a
+ *     few small strings per token, and nothing when off
  */
 public record WordClassOptions(
     HmmModel model,
@@ -27,7 +30,8 @@ public record WordClassOptions(
     ClassWeights weights,
     boolean qualifiedTerms,
     String separator,
-    int maxWindow) {
+    int maxWindow,
+    boolean explain) {
   /** Default of {@link #maxWindow}: long enough for nearly every real sentence. */
   public static final int DEFAULT_MAX_WINDOW = 512;
 
@@ -53,37 +57,42 @@ public record WordClassOptions(
     }
   }
 
-  /** Defaults: the model's order, no confidence, no payload, no qualified terms, windows of 512. */
+  /** Defaults: the model's order, no confidence, no payload, no qualified terms, windows of 512, no explanations. */
   public static WordClassOptions of(HmmModel model) {
     return new WordClassOptions(
-        model, model.order(), false, PayloadEncoding.NONE, ClassWeights.uniform(model.tags()), false, DEFAULT_SEPARATOR, DEFAULT_MAX_WINDOW);
+        model, model.order(), false, PayloadEncoding.NONE, ClassWeights.uniform(model.tags()), false, DEFAULT_SEPARATOR, DEFAULT_MAX_WINDOW,
+        false);
   }
 
   public WordClassOptions withOrder(int order) {
-    return new WordClassOptions(model, order, confidence, payload, weights, qualifiedTerms, separator, maxWindow);
+    return new WordClassOptions(model, order, confidence, payload, weights, qualifiedTerms, separator, maxWindow, explain);
   }
 
   public WordClassOptions withConfidence(boolean confidence) {
-    return new WordClassOptions(model, order, confidence, payload, weights, qualifiedTerms, separator, maxWindow);
+    return new WordClassOptions(model, order, confidence, payload, weights, qualifiedTerms, separator, maxWindow, explain);
   }
 
   public WordClassOptions withPayload(PayloadEncoding payload) {
-    return new WordClassOptions(model, order, confidence, payload, weights, qualifiedTerms, separator, maxWindow);
+    return new WordClassOptions(model, order, confidence, payload, weights, qualifiedTerms, separator, maxWindow, explain);
   }
 
   public WordClassOptions withWeights(ClassWeights weights) {
-    return new WordClassOptions(model, order, confidence, payload, weights, qualifiedTerms, separator, maxWindow);
+    return new WordClassOptions(model, order, confidence, payload, weights, qualifiedTerms, separator, maxWindow, explain);
   }
 
   public WordClassOptions withQualifiedTerms(boolean qualifiedTerms) {
-    return new WordClassOptions(model, order, confidence, payload, weights, qualifiedTerms, separator, maxWindow);
+    return new WordClassOptions(model, order, confidence, payload, weights, qualifiedTerms, separator, maxWindow, explain);
   }
 
   public WordClassOptions withSeparator(String separator) {
-    return new WordClassOptions(model, order, confidence, payload, weights, qualifiedTerms, separator, maxWindow);
+    return new WordClassOptions(model, order, confidence, payload, weights, qualifiedTerms, separator, maxWindow, explain);
   }
 
   public WordClassOptions withMaxWindow(int maxWindow) {
-    return new WordClassOptions(model, order, confidence, payload, weights, qualifiedTerms, separator, maxWindow);
+    return new WordClassOptions(model, order, confidence, payload, weights, qualifiedTerms, separator, maxWindow, explain);
+  }
+
+  public WordClassOptions withExplain(boolean explain) {
+    return new WordClassOptions(model, order, confidence, payload, weights, qualifiedTerms, separator, maxWindow, explain);
   }
 }

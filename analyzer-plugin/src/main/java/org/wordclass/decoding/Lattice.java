@@ -136,13 +136,28 @@ public final class Lattice {
       if (lowerCased.length < len) {
         lowerCased = new char[Math.max(len, 2 * lowerCased.length)];
       }
-      for (int i = 0; i < len; i++) {
-        lowerCased[i] = Character.toLowerCase(buf[off + i]);
-      }
+      lowerCase(buf, off, len, lowerCased);
       word = lexicon.lookup(lowerCased, 0, len);
       foundLowerCased = word >= 0;
     }
     return word;
+  }
+
+  /**
+   * The lower-case form a capitalised first word is looked up as, when it is not in the lexicon
+   * as written ({@link CandidateSource#LOWERCASED_FIRST_WORD}); allocates, for explanations.
+   */
+  public static String lowerCasedForm(char[] buf, int off, int len) {
+    char[] lower = new char[len];
+    lowerCase(buf, off, len, lower);
+    return new String(lower);
+  }
+
+  /** Character by character, so that the form keeps the token's length and no locale changes it. */
+  private static void lowerCase(char[] buf, int off, int len, char[] out) {
+    for (int i = 0; i < len; i++) {
+      out[i] = Character.toLowerCase(buf[off + i]);
+    }
   }
 
   private int addKnown(int word, int flags, int tag, int start) {

@@ -1,30 +1,18 @@
 package org.wordclass.decoding;
 
-import java.util.ArrayList;
 import java.util.List;
 import org.wordclass.model.HmmModel;
 
 /**
  * Tags whole token sequences given as Strings: the convenient entry point for tools, tests and
- * evaluation. The analysis filter uses {@link Decoder} directly on char buffers instead.
+ * evaluation. The analysis filter uses {@link Decoder} directly on char buffers instead, and says
+ * why each token got its class through {@code WordClassExplanationAttribute}.
  *
  * <p>Not thread-safe: one per thread.
  */
 public final class Tagger {
   /** Tags of one sequence, with the posterior probability of each chosen tag (NaN if not computed). */
   public record Tagging(int[] tags, double[] confidences, boolean[] known) {}
-
-  /**
-   * Why one token got its tag.
-   *
-   * @param tag the tag chosen by Viterbi decoding
-   * @param confidence its posterior probability given the whole sentence
-   * @param source how the token's candidate tags were chosen
-   * @param matchedEndingLength for unknown tokens, the length of the ending the suffix model matched
-   * @param tagPosteriors the posterior probability of every tag of the tag set, by tag index
-   */
-  public record Explanation(String token, int tag, double confidence, CandidateSource source, int matchedEndingLength,
-      double[] tagPosteriors) {}
 
   private final Decoder decoder;
   private int[] best = new int[64];
@@ -61,24 +49,6 @@ public final class Tagger {
       known[i] = lattice.isKnown(i);
     }
     return new Tagging(decoder.tagsOf(best), confidences, known);
-  }
-
-  /**
-   * Tags {@code tokens} and says, for each, how sure the model is, what else it considered and
-   * where the candidates came from. Costs a Viterbi and a forward-backward pass, and allocates
-   * a record and a tag-set-sized array per token: for tools, not for indexing.
-   */
-  public List<Explanation> explain(List<String> tokens) {
-    Tagging tagging = tag(tokens, true);
-    Lattice lattice = decoder.lattice();
-    List<Explanation> out = new ArrayList<>(tokens.size());
-    for (int i = 0; i < tokens.size(); i++) {
-      double[] posteriors = new double[decoder.model().tags().size()];
-      decoder.tagPosteriors(i, posteriors);
-      out.add(new Explanation(tokens.get(i), tagging.tags()[i], tagging.confidences()[i], lattice.source(i),
-          lattice.matchedEndingLength(i), posteriors));
-    }
-    return out;
   }
 
   /** Tag names of {@code tokens}. */

@@ -281,7 +281,8 @@ public class TestWordClassFilter extends BaseTokenStreamTestCase {
 
   public void testRandomStrings() throws IOException {
     for (boolean confidence : new boolean[] {false, true}) {
-      WordClassOptions options = randomOptions().withConfidence(confidence).withQualifiedTerms(true);
+      // explanations ride along with confidences, so the checks cover their attribute too
+      WordClassOptions options = randomOptions().withConfidence(confidence).withExplain(confidence).withQualifiedTerms(true);
       try (Analyzer a = mockAnalyzer(options)) {
         checkRandomData(random(), a, 1000 * RANDOM_MULTIPLIER);
       }

@@ -1,6 +1,5 @@
 package org.wordclass.decoding;
 
-import static org.junit.jupiter.api.Assertions.assertArrayEquals;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
@@ -112,29 +111,5 @@ class UserLexiconDecodingTest {
     CandidateSource[] out = new CandidateSource[lattice.size()];
     Arrays.setAll(out, lattice::source);
     return List.of(out);
-  }
-
-  @Test
-  void explanationsGiveTagPosteriorsThatSumToOne() throws Exception {
-    Tagger tagger = new Tagger(withLexicon("roast NOUN VERB\n"));
-    List<Tagger.Explanation> explained = tagger.explain(List.of("We", "roast", "the", "broth"));
-    assertEquals(4, explained.size());
-    Tagger.Explanation roast = explained.get(1);
-    assertEquals(CandidateSource.USER_LEXICON, roast.source());
-    assertEquals("VERB", BUNDLED.tags().name(roast.tag()));
-    assertEquals(roast.confidence(), roast.tagPosteriors()[roast.tag()], 1e-12);
-    for (Tagger.Explanation e : explained) {
-      assertEquals(1.0, Arrays.stream(e.tagPosteriors()).sum(), 1e-9, e.token());
-    }
-    // only the listed classes have any probability
-    double[] posteriors = roast.tagPosteriors();
-    double listed = posteriors[BUNDLED.tags().indexOf("NOUN")] + posteriors[BUNDLED.tags().indexOf("VERB")];
-    assertEquals(1.0, listed, 1e-9);
-    assertTrue(posteriors[BUNDLED.tags().indexOf("NOUN")] > 0, "the other listed class stays a candidate");
-    Tagger.Explanation broth = explained.get(3);
-    assertEquals(CandidateSource.UNKNOWN, broth.source());
-    assertEquals(3, broth.matchedEndingLength());
-    assertArrayEquals(new int[] {0, 0, 0}, new int[] {explained.get(0).matchedEndingLength(),
-        explained.get(1).matchedEndingLength(), explained.get(2).matchedEndingLength()});
   }
 }

@@ -3,7 +3,10 @@ package org.wordclass.cli;
 import java.util.ArrayList;
 import java.util.List;
 import org.wordclass.corpus.AnalysisChain;
+import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
+import picocli.CommandLine.ParameterException;
+import picocli.CommandLine.Spec;
 
 /**
  * The Lucene analysis chain that comes before the word-class filter at index time, named by SPI
@@ -21,12 +24,26 @@ final class ChainOptions {
           + "repeat for more, in chain order (for example --filter lowercase).")
   List<String> filters = new ArrayList<>();
 
+  /** The command these options belong to, for refusing a chain that cannot be built as a mistake on its command line. */
+  @Spec(Spec.Target.MIXEE)
+  CommandSpec command;
+
   private AnalysisChain chain;
 
-  /** The chain named by the options. */
+  /**
+   * The chain named by the options. A name or argument Lucene does not know is refused here, as
+   * a mistake on the command line with Lucene's message, rather than later as an internal error:
+   * the chain is built once to check it (making the factories, a fraction of a millisecond).
+   */
   AnalysisChain chain() {
     if (chain == null) {
-      chain = AnalysisChain.of(tokenizer, filters);
+      try {
+        AnalysisChain named = AnalysisChain.of(tokenizer, filters);
+        named.build().close();
+        chain = named;
+      } catch (IllegalArgumentException e) {
+        throw new ParameterException(command.commandLine(), "--tokenizer/--filter: " + e.getMessage());
+      }
     }
     return chain;
   }

@@ -3,15 +3,15 @@ package org.wordclass.cli;
 import java.util.ArrayList;
 import java.util.Comparator;
 import java.util.List;
-import java.util.Locale;
+import org.wordclass.analysis.WordClassExplanationAttribute;
 import org.wordclass.decoding.CandidateSource;
-import org.wordclass.decoding.Tagger;
 import org.wordclass.model.TagSet;
-import org.wordclass.model.WordShape;
 
 /**
- * What {@code tag --explain} and {@code tag --json} print for each token: the chosen class, its
- * confidence, the next best classes and how the token's candidate classes were chosen.
+ * What {@code tag} prints for each token, in text and JSON: the token, its offsets, the class the
+ * filter wrote and its confidence, and with {@code --explain} or {@code --json} how the token's
+ * candidate classes were chosen and the next best classes, all read from the filter's {@link
+ * WordClassExplanationAttribute}, so that nothing here decodes again.
  */
 final class ExplainedTokens {
   /** Next best classes shown per token. */
@@ -25,53 +25,69 @@ final class ExplainedTokens {
   /**
    * One token, in the shape of the JSON output; fields that do not apply are null.
    *
+   * @param start offset of the token's first character in the input, as the chain sets it
+   * @param end offset after its last character
    * @param source KNOWN, LOWERCASED_FIRST_WORD, UNKNOWN or USER_LEXICON
    * @param lookedUpAs for LOWERCASED_FIRST_WORD, the lower-case form found in the lexicon
    * @param ending for UNKNOWN, the ending the suffix model matched (may be empty)
    * @param shape for UNKNOWN, the spelling shape whose ending counts scored it
    */
-  record Token(String token, String wordClass, double confidence, String source, String lookedUpAs, String ending,
-      Integer endingLength, String shape, List<Alternative> alternatives) {}
-
-  /** One line of input. */
-  record Sentence(List<Token> tokens) {}
-
-  /** The whole JSON output. */
-  record Report(String model, String lexicon, List<Sentence> sentences) {}
+  record Token(String token, int start, int end, String wordClass, double confidence, String source, String lookedUpAs,
+      String ending, Integer endingLength, String shape, List<Alternative> alternatives) {}
 
   private ExplainedTokens() {}
 
-  static Token of(Tagger.Explanation e, TagSet tags) {
-    boolean unknown = e.source() == CandidateSource.UNKNOWN;
-    String token = e.token();
-    return new Token(token, tags.name(e.tag()), e.confidence(), e.source().name(),
-        e.source() == CandidateSource.LOWERCASED_FIRST_WORD ? token.toLowerCase(Locale.ROOT) : null,
-        unknown ? token.substring(token.length() - e.matchedEndingLength()) : null,
-        unknown ? e.matchedEndingLength() : null,
-        unknown ? WordShape.classify(token.toCharArray(), 0, token.length()).name() : null,
-        alternatives(e, tags));
+  static Token of(String token, int start, int end, int classIndex, double confidence, WordClassExplanationAttribute why,
+      TagSet tags) {
+    String ending = why.getEnding();
+    return new Token(token, start, end, tags.name(classIndex), confidence, why.getSource().name(), why.getLookedUpAs(), ending,
+        ending == null ? null : ending.length(), why.getShape() == null ? null : why.getShape().name(),
+        alternatives(classIndex, why, tags));
   }
 
   /** The most probable classes other than the chosen one, most probable first. */
-  private static List<Alternative> alternatives(Tagger.Explanation e, TagSet tags) {
+  private static List<Alternative> alternatives(int chosen, WordClassExplanationAttribute why, TagSet tags) {
     List<Alternative> all = new ArrayList<>();
-    for (int t = 0; t < tags.size(); t++) {
-      if (t != e.tag() && e.tagPosteriors()[t] >= SHOWN_PROBABILITY) {
-        all.add(new Alternative(tags.name(t), e.tagPosteriors()[t]));
+    for (int t = 0; t < why.getClassCount(); t++) {
+      double p = why.getClassProbability(t);
+      if (t != chosen && p >= SHOWN_PROBABILITY) {
+        all.add(new Alternative(tags.name(t), p));
       }
     }
     all.sort(Comparator.comparingDouble(Alternative::probability).reversed().thenComparing(Alternative::wordClass));
     return List.copyOf(all.subList(0, Math.min(ALTERNATIVES, all.size())));
   }
 
-  /** {@code token<TAB>class<TAB>confidence<TAB>how<TAB>next best}. */
-  static String text(Token t) {
-    StringBuilder next = new StringBuilder();
-    for (Alternative a : t.alternatives()) {
-      next.append(next.length() == 0 ? "" : ", ").append(String.format(Locale.ROOT, "%s %.4f", a.wordClass(), a.probability()));
+  /** {@code token<TAB>start<TAB>end<TAB>class}, then {@code <TAB>confidence} if it was computed. */
+  static void appendPlain(StringBuilder line, String token, int start, int end, String wordClass, double confidence) {
+    line.append(token).append('\t').append(start).append('\t').append(end).append('\t').append(wordClass);
+    if (!Double.isNaN(confidence)) {
+      appendProbability(line.append('\t'), confidence);
     }
-    return String.format(Locale.ROOT, "%s\t%s\t%.4f\t%s\t%s", t.token(), t.wordClass(), t.confidence(), how(t),
-        next.length() == 0 ? "-" : next);
+  }
+
+  /** {@code token<TAB>start<TAB>end<TAB>class<TAB>confidence<TAB>how<TAB>next best}. */
+  static void appendExplained(StringBuilder line, Token t) {
+    appendPlain(line, t.token(), t.start(), t.end(), t.wordClass(), t.confidence());
+    line.append('\t').append(how(t)).append('\t');
+    if (t.alternatives().isEmpty()) {
+      line.append('-');
+    }
+    for (int i = 0; i < t.alternatives().size(); i++) {
+      Alternative a = t.alternatives().get(i);
+      appendProbability(line.append(i == 0 ? "" : ", ").append(a.wordClass()).append(' '), a.probability());
+    }
+  }
+
+  /**
+   * A probability in [0, 1] with four decimals, as {@code %.4f} prints it but without a format
+   * parse per call: {@code tag} prints millions of them on a long input.
+   */
+  static void appendProbability(StringBuilder line, double p) {
+    long tenThousandths = Math.round(Math.min(1, Math.max(0, p)) * 10_000);
+    line.append(tenThousandths / 10_000).append('.');
+    String digits = Long.toString(tenThousandths % 10_000);
+    line.append("0000", digits.length(), 4).append(digits);
   }
 
   private static String how(Token t) {

@@ -7,8 +7,11 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import org.apache.lucene.analysis.Analyzer;
+import org.apache.lucene.analysis.AnalyzerWrapper;
 import org.apache.lucene.analysis.custom.CustomAnalyzer;
 import org.wordclass.analysis.SentenceStandardTokenizerFactory;
+import org.wordclass.analysis.WordClassFilter;
+import org.wordclass.analysis.WordClassOptions;
 
 /**
  * A Lucene analysis chain named the way {@link CustomAnalyzer} takes it: a tokenizer and token
@@ -89,6 +92,31 @@ public final class AnalysisChain {
     } catch (IOException e) {
       throw new UncheckedIOException(e);
     }
+  }
+
+  /**
+   * The chain with a {@link WordClassFilter} of {@code options} after its last component: the
+   * whole chain as an index runs it, for showing what the index gets. Closing it closes the chain.
+   */
+  public Analyzer buildWithWordClass(WordClassOptions options) {
+    Analyzer chain = build();
+    return new AnalyzerWrapper(chain.getReuseStrategy()) {
+      @Override
+      protected Analyzer getWrappedAnalyzer(String fieldName) {
+        return chain;
+      }
+
+      @Override
+      protected TokenStreamComponents wrapComponents(String fieldName, TokenStreamComponents components) {
+        return new TokenStreamComponents(components.getSource(), new WordClassFilter(components.getTokenStream(), options));
+      }
+
+      @Override
+      public void close() {
+        super.close();
+        chain.close();
+      }
+    };
   }
 
   public Component tokenizer() {

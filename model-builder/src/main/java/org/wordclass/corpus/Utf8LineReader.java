@@ -1,17 +1,11 @@
 package org.wordclass.corpus;
 
 import java.io.BufferedInputStream;
-import java.io.ByteArrayOutputStream;
 import java.io.Closeable;
 import java.io.FilterInputStream;
 import java.io.IOException;
 import java.io.InputStream;
 import java.io.UncheckedIOException;
-import java.nio.ByteBuffer;
-import java.nio.charset.CharacterCodingException;
-import java.nio.charset.CharsetDecoder;
-import java.nio.charset.CodingErrorAction;
-import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.security.DigestInputStream;
@@ -21,8 +15,9 @@ import java.util.HexFormat;
 import java.util.zip.GZIPInputStream;
 
 /**
- * Reads a text file line by line as strict UTF-8, decoding each line on its own so that a broken
- * byte sequence is reported on the line that holds it. Files ending in {@code .gz} are
+ * Reads a text file line by line as strict UTF-8 ({@link StrictUtf8Reader}: a broken byte
+ * sequence or a NUL is reported on the line that holds it, a leading byte-order mark is skipped);
+ * lines end in LF or CR LF, and a CR alone is refused. Files ending in {@code .gz} are
  * decompressed on the fly. The SHA-256 of the bytes as stored is computed while reading, for the
  * provenance of models built from the file, and the bytes read are counted, for progress display.
  */
@@ -31,12 +26,12 @@ public final class Utf8LineReader implements Closeable {
   private final InputStream in;
   private final MessageDigest digest;
   private final ByteCounter counter;
-  private final CharsetDecoder decoder = StandardCharsets.UTF_8.newDecoder()
-      .onMalformedInput(CodingErrorAction.REPORT)
-      .onUnmappableCharacter(CodingErrorAction.REPORT);
-  private final ByteArrayOutputStream line = new ByteArrayOutputStream(256);
+  private final StrictUtf8Reader text;
+  private final char[] buffer = new char[StrictUtf8Reader.BUFFER];
+  private int position;
+  private int limit;
+  private final StringBuilder line = new StringBuilder(256);
   private long lineNumber;
-  private boolean sawAnyByte;
 
   public Utf8LineReader(Path path) throws IOException {
     this.name = path.toString();
@@ -49,13 +44,15 @@ public final class Utf8LineReader implements Closeable {
     InputStream raw = new DigestInputStream(new BufferedInputStream(counter, 1 << 16), digest);
     if (path.getFileName().toString().endsWith(".gz")) {
       try {
-        raw = new BufferedInputStream(new GZIPInputStream(raw, 1 << 16), 1 << 16);
+        // no buffer above: a BufferedInputStream would drop the bytes it holds when a cut file ends the inflater
+        raw = new GZIPInputStream(raw, 1 << 16);
       } catch (IOException e) {
         raw.close();
         throw new CorpusFormatException(name, 0, "not a readable gzip file (" + e.getMessage() + ")");
       }
     }
     this.in = raw;
+    this.text = new StrictUtf8Reader(raw, name);
   }
 
   public String name() {
@@ -77,52 +74,50 @@ public final class Utf8LineReader implements Closeable {
 
   /** Whether the file had any byte at all. */
   public boolean sawAnyByte() {
-    return sawAnyByte;
+    return text.sawAnyByte();
   }
 
   /** The next line without its line terminator, or null at the end of the file. */
   public String readLine() {
-    line.reset();
-    try {
-      int b;
-      boolean any = false;
-      boolean carriageReturn = false;
-      while ((b = in.read()) >= 0) {
-        any = true;
-        sawAnyByte = true;
-        if (carriageReturn && b != '\n') {
-          throw lineEndError();
-        }
-        if (b == '\n') {
-          break;
-        }
-        carriageReturn = b == '\r';
-        line.write(b);
-      }
-      if (!any) {
-        return null;
-      }
-      if (b < 0 && carriageReturn) {
+    line.setLength(0);
+    boolean any = false;
+    boolean carriageReturn = false;
+    int c;
+    while ((c = next()) >= 0) {
+      any = true;
+      if (carriageReturn && c != '\n') {
         throw lineEndError();
       }
-    } catch (IOException e) {
-      throw new CorpusFormatException(name, lineNumber + 1, "cannot be read: " + e.getMessage());
+      if (c == '\n') {
+        break;
+      }
+      carriageReturn = c == '\r';
+      line.append((char) c);
+    }
+    if (!any) {
+      return null;
+    }
+    if (c < 0 && carriageReturn) {
+      throw lineEndError();
     }
     lineNumber++;
-    byte[] bytes = line.toByteArray();
-    int length = bytes.length;
-    if (length > 0 && bytes[length - 1] == '\r') {
-      length--;
+    if (carriageReturn) {
+      line.setLength(line.length() - 1);
     }
-    try {
-      String text = decoder.decode(ByteBuffer.wrap(bytes, 0, length)).toString();
-      if (lineNumber == 1 && text.startsWith("\uFEFF")) {
-        text = text.substring(1);
+    return line.toString();
+  }
+
+  /** The next character, or -1 at the end of the file. */
+  private int next() {
+    if (position == limit) {
+      limit = text.read(buffer, 0, buffer.length);
+      position = 0;
+      if (limit < 0) {
+        limit = 0;
+        return -1;
       }
-      return text;
-    } catch (CharacterCodingException e) {
-      throw new CorpusFormatException(name, lineNumber, "is not valid UTF-8 (" + e.getClass().getSimpleName() + ")");
     }
+    return buffer[position++];
   }
 
   /**

@@ -33,6 +33,8 @@ class MalformedInputTableTest {
       + "2\totter\totter\tNOUN\tNN\t_\t_\t_\t_\t_\n"
       + "3\tslept\tsleep\tVERB\tVBD\t_\t_\t_\t_\t_\n"
       + "4\t.\t.\tPUNCT\t.\t_\t_\t_\t_\t_\n\n";
+  /** What the strict UTF-8 decoding says of a NUL; {@code tag} says the same of its input. */
+  static final String NUL = "holds a NUL character (byte 0), which text never does (is it UTF-16, or not text at all?)";
   private static final String PLAIN = "the\tDET\notter\tNOUN\nslept\tVERB\n.\tPUNCT\n\n";
 
   /** One kind of malformed input: what it is, the file it comes in, and what the user is told. */
@@ -94,6 +96,7 @@ class MalformedInputTableTest {
         row("an empty file", "empty.conllu", new byte[0], "FILE: is empty"),
         row("a byte that is not UTF-8", "latin1.conllu", latin1(CONLLU.replace("otter", "café")), "FILE:1: is not valid UTF-8 (MalformedInputException)"),
         row("a UTF-16 file with its byte order mark", "utf16.conllu", utf16(CONLLU), "FILE:1: is not valid UTF-8 (MalformedInputException)"),
+        conllu("a NUL character", CONLLU.replace("2\totter", "2\tot\0ter"), "FILE:3: " + NUL),
         row("an image instead of text", "image.conllu", new byte[] {(byte) 0x89, 'P', 'N', 'G', '\r', '\n', 0x1A, '\n', 0, 0, 0, 13},
             "FILE:1: is not valid UTF-8 (MalformedInputException)"),
         row("a .gz name on an uncompressed file", "plain.conllu.gz", utf8(CONLLU), "FILE: not a readable gzip file (Not in GZIP format)"),
@@ -110,6 +113,7 @@ class MalformedInputTableTest {
         row("a byte that is not UTF-8", "latin1.txt", latin1(PLAIN.replace("otter", "café")), "FILE:2: is not valid UTF-8 (MalformedInputException)"),
         plain("CR-only line ends (old Mac OS)", PLAIN.replace("\n", "\r"),
             "FILE:1: carriage return (CR) without a line feed; lines must end in LF or CR LF (convert CR-only line ends first)"),
+        row("a UTF-16 file without a byte order mark", "utf16.txt", PLAIN.getBytes(StandardCharsets.UTF_16LE), "FILE:1: " + NUL),
         plain("CoNLL-U in a plain file", CONLLU, "FILE:1: expected 2 tab-separated columns (token, tag) but found 1"));
   }
 

@@ -108,21 +108,23 @@ class UserLexiconCliTest {
     List<String> lines = ok("tag", "--explain", "--lexicon", cooking.toString(), "Stir the broth the cook made").out().lines().toList();
     assertEquals(6, lines.size(), lines::toString);
     String[][] fields = lines.stream().map(l -> l.split("\t")).toArray(String[][]::new);
+    // token, start, end, class, confidence, how, next best
     for (String[] f : fields) {
-      assertEquals(5, f.length, String.join("|", f));
+      assertEquals(7, f.length, String.join("|", f));
     }
-    assertEquals("known as 'stir' (first word, lower-cased)", fields[0][3]);
-    assertEquals("known", fields[1][3]);
-    assertEquals("unknown: ending 'oth', shape LOWER", fields[2][3]);
-    assertEquals(List.of("cook", "NOUN", "user lexicon"), List.of(fields[4][0], fields[4][1], fields[4][3]));
+    assertEquals("known as 'stir' (first word, lower-cased)", fields[0][5]);
+    assertEquals("known", fields[1][5]);
+    assertEquals("unknown: ending 'oth', shape LOWER", fields[2][5]);
+    assertEquals(List.of("cook", "19", "23", "NOUN", "user lexicon"), List.of(fields[4][0], fields[4][1], fields[4][2], fields[4][3],
+        fields[4][5]));
     // the next best classes: the other listed class only, less probable than the chosen one
-    String[] verb = fields[4][4].split(" ");
+    String[] verb = fields[4][6].split(" ");
     assertEquals("VERB", verb[0]);
-    assertTrue(Double.parseDouble(verb[1]) < Double.parseDouble(fields[4][2]), lines.get(4));
-    assertEquals(1.0, Double.parseDouble(verb[1]) + Double.parseDouble(fields[4][2]), 1.5e-4, lines.get(4));
+    assertTrue(Double.parseDouble(verb[1]) < Double.parseDouble(fields[4][4]), lines.get(4));
+    assertEquals(1.0, Double.parseDouble(verb[1]) + Double.parseDouble(fields[4][4]), 1.5e-4, lines.get(4));
     // an unknown word has several alternatives, most probable first
     List<Double> alternatives = new ArrayList<>();
-    for (String item : fields[2][4].split(", ")) {
+    for (String item : fields[2][6].split(", ")) {
       alternatives.add(Double.parseDouble(item.split(" ")[1]));
     }
     assertEquals(ExplainedTokens.ALTERNATIVES, alternatives.size(), lines.get(2));
@@ -137,8 +139,8 @@ class UserLexiconCliTest {
     assertTrue(report.get("model").asText().contains("bundled"));
     JsonNode sentences = report.get("sentences");
     assertEquals(2, sentences.size());
-    Set<String> expectedKeys = Set.of("token", "wordClass", "confidence", "source", "lookedUpAs", "ending", "endingLength",
-        "shape", "alternatives");
+    Set<String> expectedKeys = Set.of("token", "start", "end", "wordClass", "confidence", "source", "lookedUpAs", "ending",
+        "endingLength", "shape", "alternatives");
     for (JsonNode sentence : sentences) {
       for (JsonNode token : sentence.get("tokens")) {
         assertEquals(expectedKeys, fieldNames(token), token::toString);

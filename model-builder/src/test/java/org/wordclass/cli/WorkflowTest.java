@@ -232,13 +232,14 @@ class WorkflowTest {
     Cli.Result r = Cli.run("tag", "--model", model.toString(), "the quiet otter slept near a kettle.");
     assertEquals(0, r.exitCode(), r::toString);
     List<String> lines = r.out().lines().toList();
-    assertEquals(8, lines.size(), r::toString);
-    String[] expected = {"DET", "ADJ", "NOUN", "VERB", "ADP", "DET", "NOUN", "PUNCT"};
+    // the default chain keeps the standard tokenizer's tokens: no full stop
+    assertEquals(7, lines.size(), r::toString);
+    String[] expected = {"DET", "ADJ", "NOUN", "VERB", "ADP", "DET", "NOUN"};
     for (int i = 0; i < expected.length; i++) {
       String[] fields = lines.get(i).split("\t");
-      assertEquals(3, fields.length, lines.get(i));
-      assertEquals(expected[i], fields[1], lines.get(i));
-      double confidence = Double.parseDouble(fields[2]);
+      assertEquals(5, fields.length, lines.get(i));
+      assertEquals(expected[i], fields[3], lines.get(i));
+      double confidence = Double.parseDouble(fields[4]);
       assertTrue(confidence > 0 && confidence <= 1, lines.get(i));
     }
   }
@@ -250,7 +251,9 @@ class WorkflowTest {
       System.setIn(new ByteArrayInputStream("Maribel laughed .\n\nwe will mend it !\n".getBytes(StandardCharsets.UTF_8)));
       Cli.Result r = Cli.run("tag", "--model", model.toString(), "--no-confidence");
       assertEquals(0, r.exitCode(), r::toString);
-      assertEquals("Maribel\tPROPN\nlaughed\tVERB\n.\tPUNCT\n\nwe\tPRON\nwill\tAUX\nmend\tVERB\nit\tPRON\n!\tPUNCT\n",
+      // token, offsets in the whole input, class; a line break starts a sentence (sentenceStandard)
+      assertEquals("Maribel\t0\t7\tPROPN\nlaughed\t8\t15\tVERB\n\nwe\t19\t21\tPRON\nwill\t22\t26\tAUX\nmend\t27\t31\tVERB\n"
+          + "it\t32\t34\tPRON\n",
           r.out().replace(System.lineSeparator(), "\n"));
     } finally {
       System.setIn(saved);
