@@ -27,6 +27,11 @@ public final class ConfigFiles {
     return read(examples().resolve("opensearch/index-settings.json"));
   }
 
+  /** The French example: config-examples/opensearch/index-settings-fr.json, as it is (the shipped French model, no files). */
+  public static String frenchIndexSettings() {
+    return read(examples().resolve("opensearch/index-settings-fr.json"));
+  }
+
   public static void install(Path configDir) throws IOException {
     Path dir = Files.createDirectories(configDir.resolve("wordclass"));
     Files.copy(examples().resolve("lucene/hiking-lexicon.txt"), dir.resolve("hiking-lexicon.txt"));

@@ -62,6 +62,13 @@ public abstract class PluginOnNodeTestCase {
     node.call("DELETE", "/" + RestScenario.INDEX, null);
   }
 
+  /** The language pack is in the installed plugin: the French example index needs no file on the node. */
+  @Test
+  public void theInstalledPluginShipsTheFrenchModel() throws IOException {
+    scenario.frenchIndexTagsWithTheFrenchModel();
+    node.call("DELETE", "/" + RestScenario.FRENCH_INDEX, null);
+  }
+
   @Test
   public void badSettingsAreRefusedWith400() throws IOException {
     // the locked model belongs to the node's user, who may not read it

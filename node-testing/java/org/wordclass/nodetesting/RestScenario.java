@@ -92,6 +92,39 @@ public final class RestScenario {
     assertTrue("a posterior probability: " + confidence, confidence > 0.5 && confidence <= 1.0);
   }
 
+  /** Index of the French example settings. */
+  public static final String FRENCH_INDEX = "recettes";
+
+  /**
+   * The French example index (language "fr", the model shipped in the plugin): _analyze shows the
+   * French model's classes and name, and a qualified term finds the verb "porte" (she carries)
+   * but not the noun (the door) — French grammar, common practice; the classes are those the
+   * shipped French model gives these invented sentences, as config-examples' FrenchFieldTest
+   * checks them in Solr.
+   */
+  public void frenchIndexTagsWithTheFrenchModel() throws IOException {
+    ok("PUT", "/" + FRENCH_INDEX, ConfigFiles.frenchIndexSettings());
+    Rest.Response explained = ok("POST", "/" + FRENCH_INDEX + "/_analyze",
+        "{\"analyzer\":\"fr_tagged\",\"text\":\"Fermez la porte du four\",\"explain\":true,\"attributes\":[\"wordClass\",\"model\"]}");
+    List<String> classes = new ArrayList<>();
+    for (Object token : (List<?>) explained.at("detail", "tokenfilters", 0, "tokens")) {
+      Map<?, ?> t = (Map<?, ?>) token;
+      if (!((String) t.get("token")).contains("_")) {
+        classes.add((String) t.get("wordClass"));
+        assertEquals(explained.text, "fr-gsd-upos", t.get("model"));
+      }
+    }
+    // "du" = de + le is one token and takes the preposition's class (docs/languages.md)
+    assertEquals(explained.text, List.of("VERB", "DET", "NOUN", "ADP", "NOUN"), classes);
+
+    String bulk = "{\"index\":{\"_id\":\"f1\"}}\n{\"note\":\"Elle porte le panier au marché\"}\n"
+        + "{\"index\":{\"_id\":\"f2\"}}\n{\"note\":\"La porte de la cuisine reste ouverte\"}\n";
+    Rest.Response indexed = ok("POST", "/" + FRENCH_INDEX + "/_bulk?refresh=true", bulk);
+    assertEquals(indexed.text, Boolean.FALSE, indexed.at("errors"));
+    Rest.Response found = ok("POST", "/" + FRENCH_INDEX + "/_search", "{\"query\":{\"term\":{\"note\":\"porte_verb\"}}}");
+    assertEquals(List.of("f1"), ranking(found));
+  }
+
   /** The ids a query finds, optionally on one shard only. */
   Set<String> ids(String query, String preference) throws IOException {
     String path = "/" + INDEX + "/_search" + (preference == null ? "" : "?preference=" + preference);

@@ -118,4 +118,8 @@ public class ClusterRestTest extends OpenSearchIntegTestCase {
     // the test JVM may run as root, who reads any file: the unreadable model is the distribution test's
     scenario().badSettingsAreRefused(null);
   }
+
+  public void testFrenchExampleIndexUsesTheShippedFrenchModel() throws IOException {
+    scenario().frenchIndexTagsWithTheFrenchModel();
+  }
 }
