@@ -135,7 +135,7 @@ public final class Lattice {
     Lexicon lexicon = model.lexicon();
     int word = lexicon.lookup(buf, off, len);
     foundLowerCased = false;
-    if (size == 0 && lowerCaseFirst(word) && startsWithCapital(buf, off, len)) {
+    if (size == 0 && startsWithCapital(buf, off, len) && lowerCaseFirst(word)) {
       if (lowerCased.length < len) {
         lowerCased = new char[Math.max(len, 2 * lowerCased.length)];
       }
@@ -154,8 +154,8 @@ public final class Lattice {
     if (word < 0) {
       return model.cues().lowercaseFirstWord();
     }
-    if (!model.cues().lowercaseMidSentenceFirstWord() || !splitsByCapital) {
-      return false;
+    if (!model.cues().lowercaseMidSentenceFirstWord() || !splitsByCapital || model.lexicon().isUserListed(word)) {
+      return false; // a user's entry is taken as given
     }
     // training puts every first word in a state "not capitalised": none means never seen first
     for (int k = 0; k < model.lexicon().tagCount(word); k++) {
