@@ -127,25 +127,46 @@ public final class Lattice {
     return foundLowerCased ? CandidateSource.LOWERCASED_FIRST_WORD : CandidateSource.KNOWN;
   }
 
-  /** The word's id; a capitalised first word missing from the lexicon is looked up in lower case. */
+  /**
+   * The word's id; a capitalised first word missing from the lexicon, or (a cue of its own) known
+   * only from mid-sentence, is looked up in lower case, and keeps its own entry if that fails.
+   */
   private int lookup(char[] buf, int off, int len) {
     Lexicon lexicon = model.lexicon();
     int word = lexicon.lookup(buf, off, len);
     foundLowerCased = false;
-    if (word < 0 && size == 0 && model.cues().lowercaseFirstWord() && startsWithCapital(buf, off, len)) {
+    if (size == 0 && startsWithCapital(buf, off, len) && lowerCaseFirst(word)) {
       if (lowerCased.length < len) {
         lowerCased = new char[Math.max(len, 2 * lowerCased.length)];
       }
       lowerCase(buf, off, len, lowerCased);
-      word = lexicon.lookup(lowerCased, 0, len);
-      foundLowerCased = word >= 0;
+      int lower = lexicon.lookup(lowerCased, 0, len);
+      foundLowerCased = lower >= 0;
+      word = foundLowerCased ? lower : word;
     }
     return word;
   }
 
+  /** Whether a capitalised first word with this id (-1: unknown) is to be looked up in lower case. */
+  private boolean lowerCaseFirst(int word) {
+    if (word < 0) {
+      return model.cues().lowercaseFirstWord();
+    }
+    if (!model.cues().lowercaseMidSentenceFirstWord() || !splitsByCapital || model.lexicon().isUserListed(word)) {
+      return false; // a user's entry is taken as given
+    }
+    // training puts every first word in a state "not capitalised": none means never seen first
+    for (int k = 0; k < model.lexicon().tagCount(word); k++) {
+      if (states.flags(model.lexicon().tag(word, k)) == 0) {
+        return false;
+      }
+    }
+    return true;
+  }
+
   /**
-   * The lower-case form a capitalised first word is looked up as, when it is not in the lexicon
-   * as written ({@link CandidateSource#LOWERCASED_FIRST_WORD}); allocates, for explanations.
+   * The lower-case form a capitalised first word is looked up as ({@link
+   * CandidateSource#LOWERCASED_FIRST_WORD}); allocates, for explanations.
    */
   public static String lowerCasedForm(char[] buf, int off, int len) {
     char[] lower = new char[len];

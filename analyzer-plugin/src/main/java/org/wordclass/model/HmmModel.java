@@ -42,9 +42,19 @@ public final class HmmModel {
    *     case ("Bake" as "bake"), since capitals there say nothing about the class
    * @param unseenContextLogWeight for words with context-dependent emissions: log of the weight
    *     of the plain emission when the previous state was never seen before the word
+   * @param lowercaseMidSentenceFirstWord look a capitalised first word up in lower case also when
+   *     it is known but only from mid-sentence ("Book" from titles, as a name): in a model with
+   *     capitalisation states its lexicon entry then has no state a first word may take, and
+   *     says nothing about it as a first word. No effect without capitalisation states
    */
-  public record DecodingCues(boolean lowercaseFirstWord, double unseenContextLogWeight) {
+  public record DecodingCues(boolean lowercaseFirstWord, double unseenContextLogWeight,
+      boolean lowercaseMidSentenceFirstWord) {
     public static final DecodingCues NONE = new DecodingCues(false, 0);
+
+    /** Cues without the lower-case lookup of first words known only from mid-sentence. */
+    public DecodingCues(boolean lowercaseFirstWord, double unseenContextLogWeight) {
+      this(lowercaseFirstWord, unseenContextLogWeight, false);
+    }
   }
 
   /** A model with one state per tag and no extra cues. */

@@ -16,6 +16,7 @@ import org.junit.jupiter.params.provider.ValueSource;
 import org.wordclass.model.DefaultModel;
 import org.wordclass.model.HmmModel;
 import org.wordclass.model.Lexicon;
+import org.wordclass.model.StateSpace;
 import org.wordclass.model.UnknownWordModel;
 
 /** Decoding the bundled model on random word sequences: numeric range and the lexicon constraint. */
@@ -201,10 +202,19 @@ class BundledModelDecodingTest {
   }
 
   /** An unknown capitalised first word is looked up in lower case when the model asks for it. */
+  /**
+   * A capitalised first word is looked up in lower case if it is unknown, or (docs/model-format.md,
+   * field 8c, bit 1) known only in states of words capitalised in mid-sentence; it keeps its own
+   * entry if the lower-case form is unknown.
+   */
   private static int lookupAsTheLatticeDoes(String token, int position) {
     int word = MODEL.lexicon().lookup(token);
-    if (word < 0 && position == 0 && MODEL.cues().lowercaseFirstWord() && Character.isUpperCase(token.charAt(0))) {
-      word = MODEL.lexicon().lookup(token.toLowerCase(java.util.Locale.ROOT));
+    boolean lowerCase = word < 0 ? MODEL.cues().lowercaseFirstWord()
+        : MODEL.cues().lowercaseMidSentenceFirstWord() && IntStream.range(0, MODEL.lexicon().tagCount(word))
+            .allMatch(k -> MODEL.states().flags(MODEL.lexicon().tag(word, k)) == StateSpace.CAPITALISED);
+    if (lowerCase && position == 0 && Character.isUpperCase(token.charAt(0))) {
+      int lower = MODEL.lexicon().lookup(token.toLowerCase(java.util.Locale.ROOT));
+      return lower >= 0 ? lower : word;
     }
     return word;
   }

@@ -40,7 +40,9 @@ class DocumentedLayoutTest {
       assertEquals(states.tagOf(s), vint());
       assertEquals(states.flags(s), in.get());
     }
-    assertEquals(model.cues().lowercaseFirstWord() ? 1 : 0, in.get());
+    // docs/model-format.md, field 8c: bit 0 unknown first words, bit 1 those known only from mid-sentence
+    assertEquals((model.cues().lowercaseFirstWord() ? 1 : 0) | (model.cues().lowercaseMidSentenceFirstWord() ? 2 : 0),
+        in.get());
     assertEquals(model.cues().unseenContextLogWeight(), in.getDouble());
     assertArrayEquals(model.logBigramTable(), floats(model.logBigramTable().length));
     assertArrayEquals(model.logTrigramTable(), floats(model.logTrigramTable().length));
@@ -50,7 +52,7 @@ class DocumentedLayoutTest {
   }
 
   private void header() {
-    byte[] expected = {0x3f, (byte) 0xd7, 0x6c, 0x17, 0x0c, 'W', 'o', 'r', 'd', 'C', 'l', 'a', 's', 's', 'H', 'm', 'm', 0, 0, 0, 2};
+    byte[] expected = {0x3f, (byte) 0xd7, 0x6c, 0x17, 0x0c, 'W', 'o', 'r', 'd', 'C', 'l', 'a', 's', 's', 'H', 'm', 'm', 0, 0, 0, 3};
     assertArrayEquals(expected, Arrays.copyOf(bytes, 21));
     in.position(21);
   }

@@ -96,6 +96,47 @@ class ModelFileRoundTripTest {
     assertArrayEquals(current, TestModels.bytes(read), "written again in the current version");
   }
 
+  /**
+   * Both first-word cues survive writing and reading; a version-2 file, whose cue byte holds only
+   * the lookup of unknown first words, is read with the newer cue off; a version-3 byte with a
+   * bit no cue has is refused. The cue byte is found as the one byte of the body that differs
+   * between the same model written with and without the newer cue.
+   */
+  @Test
+  void firstWordCuesAreOneBitEachFromVersionThree() throws IOException {
+    HmmModel on = withCues(TestModels.small(), new HmmModel.DecodingCues(true, -0.5, true));
+    HmmModel off = withCues(TestModels.small(), new HmmModel.DecodingCues(true, -0.5, false));
+    assertEquals(on.cues(), ModelFile.read(TestModels.bytes(on), "on").cues());
+    assertEquals(off.cues(), ModelFile.read(TestModels.bytes(off), "off").cues());
+    byte[] a = TestModels.bytes(on);
+    byte[] b = TestModels.bytes(off);
+    int header = 21;
+    int footer = 16;
+    int cueByte = -1;
+    for (int i = header; i < a.length - footer; i++) {
+      if (a[i] != b[i]) {
+        assertEquals(-1, cueByte, "one differing byte");
+        cueByte = i;
+      }
+    }
+    assertEquals(3, a[cueByte]);
+    assertEquals(1, b[cueByte]);
+    byte[] body = java.util.Arrays.copyOfRange(a, header, a.length - footer);
+    byte[] versionTwo = TestModels.withHeaderAndFooter(ModelFile.VERSION_CAPITALISED_PRIORS,
+        out -> out.writeBytes(body, body.length));
+    assertEquals(new HmmModel.DecodingCues(true, -0.5, false), ModelFile.read(versionTwo, "v2").cues());
+    body[cueByte - header] = 7;
+    byte[] unknownBit = TestModels.withHeaderAndFooter(ModelFile.VERSION_CURRENT, out -> out.writeBytes(body, body.length));
+    ModelFormatException e = org.junit.jupiter.api.Assertions.assertThrows(ModelFormatException.class,
+        () -> ModelFile.read(unknownBit, "bits"));
+    org.junit.jupiter.api.Assertions.assertTrue(e.getMessage().contains("first-word cue bits 7"), e.getMessage());
+  }
+
+  private static HmmModel withCues(HmmModel m, HmmModel.DecodingCues cues) {
+    return new HmmModel(m.order(), m.tags(), m.states(), cues, m.logBigramTable(), m.logTrigramTable(), m.lexicon(),
+        m.unknownWords(), m.provenance());
+  }
+
   private static int indexOf(byte[] haystack, byte[] needle) {
     outer:
     for (int i = 0; i + needle.length <= haystack.length; i++) {

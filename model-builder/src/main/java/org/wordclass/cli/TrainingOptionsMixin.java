@@ -70,6 +70,11 @@ final class TrainingOptionsMixin {
           + "Default: ${DEFAULT-VALUE}.")
   boolean lowercaseFirstWord;
 
+  @Option(names = "--lowercase-mid-sentence-first-word", negatable = true, fallbackValue = "true",
+      description = "Look a capitalised first word of a sentence up in lower case also when it is known only "
+          + "from mid-sentence (Book, seen only in titles, as book). Default: ${DEFAULT-VALUE}.")
+  boolean lowercaseMidSentenceFirstWord;
+
   @Option(names = "--context-min-count", paramLabel = "N",
       description = "Keep a word's context-dependent probability only for contexts seen at least N times. "
           + "Default: ${DEFAULT-VALUE}.")
@@ -109,7 +114,8 @@ final class TrainingOptionsMixin {
       TrainingOptions options = new TrainingOptions(order, maxSuffixLength, rareWordMaxCount,
           TrainingOptions.SuffixWeightRule.HELD_OUT, Double.NaN, openClassMinShare, shapeClasses,
           capitalisationStates, contextEmissions, lowercaseFirstWord, contextMinCount, latentRounds,
-          unknownWordPrior(unknownWordPrior), lowerCaseForms, maxPrefixLength, minTagShare);
+          unknownWordPrior(unknownWordPrior), lowerCaseForms, maxPrefixLength, minTagShare,
+          lowercaseMidSentenceFirstWord);
       return withSuffixWeight(options, suffixWeight);
     } catch (IllegalArgumentException e) {
       throw new ParameterException(mixee.commandLine(), "Invalid training option: " + e.getMessage());

@@ -84,7 +84,7 @@ public final class HmmEstimator {
     Lexicon lexicon = new Lexicon(entries);
     UnknownWordModel unknown = unknownWordModel(counts, wordTags, finalId, tagTokens, tagSet, lexicon, plan);
     HmmModel.DecodingCues cues = new HmmModel.DecodingCues(options.lowercaseFirstWord(),
-        options.contextEmissions() ? Math.log(1 - contextWeight(0)) : 0);
+        options.contextEmissions() ? Math.log(1 - contextWeight(0)) : 0, options.lowercaseMidSentenceFirstWord());
 
     Map<String, String> all = new TreeMap<>(provenance);
     all.putAll(options.describe());

@@ -138,7 +138,8 @@ public final class LatentStates {
     provenance.putAll(notes);
     provenance.put("latent.states", Integer.toString(counts.space.size()));
     return new HmmModel(supervised.order(), supervised.tags(), counts.space,
-        new HmmModel.DecodingCues(supervised.cues().lowercaseFirstWord(), 0), tables[0], tables[1],
+        new HmmModel.DecodingCues(supervised.cues().lowercaseFirstWord(), 0,
+            supervised.cues().lowercaseMidSentenceFirstWord()), tables[0], tables[1],
         lexicon(counts), supervised.unknownWords(), provenance);
   }
 

@@ -39,6 +39,8 @@ import java.util.function.Consumer;
  *     org.wordclass.model.LowerCaseFormCue}; a model with latent states goes without it
  * @param maxPrefixLength longest word beginning whose tag distribution (over rare words) weighs
  *     an unknown word's tags beside its ending; 0 to look at endings only
+ * @param lowercaseMidSentenceFirstWord look a capitalised sentence-initial word up in lower case
+ *     also when it is known only from mid-sentence (needs capitalisation states to tell)
  * @param minTagShare a known word keeps a tag only if at least this share of its training
  *     occurrences carry it; rarer word/tag pairs, mostly annotation slips in frequent words
  *     ("the" as a proper noun), are left out of the lexicon, which spares the decoder their
@@ -61,16 +63,17 @@ public record TrainingOptions(
     UnknownWordPrior unknownWordPrior,
     boolean lowerCaseForms,
     int maxPrefixLength,
-    double minTagShare) {
+    double minTagShare,
+    boolean lowercaseMidSentenceFirstWord) {
 
   public static final TrainingOptions DEFAULTS =
       new TrainingOptions(2, 10, 10, SuffixWeightRule.HELD_OUT, Double.NaN, 0.002, false, true, true, true, 3, 0,
-          UnknownWordPrior.LOWER_CASE_STATE, true, 4, 0.002);
+          UnknownWordPrior.LOWER_CASE_STATE, true, 4, 0.002, true);
 
   /** The classic second-order model with a suffix model and none of the later cues. */
   public static final TrainingOptions CLASSIC =
       DEFAULTS.withCues(false, false, false).withUnknownWordPrior(UnknownWordPrior.TAG).withLowerCaseForms(false)
-          .withMaxPrefixLength(0).withMinTagShare(0);
+          .withMaxPrefixLength(0).withMinTagShare(0).withLowercaseMidSentenceFirstWord(false);
 
   /** How θ of the suffix model is chosen. */
   public enum SuffixWeightRule {
@@ -202,6 +205,11 @@ public record TrainingOptions(
     return copy(b -> b.maxPrefixLength = length);
   }
 
+  /** Whether capitalised first words known only from mid-sentence are looked up in lower case. */
+  public TrainingOptions withLowercaseMidSentenceFirstWord(boolean use) {
+    return copy(b -> b.lowercaseMidSentenceFirstWord = use);
+  }
+
   /** The lexicon's minimum tag share (0 keeps every word/tag pair). */
   public TrainingOptions withMinTagShare(double share) {
     return copy(b -> b.minTagShare = share);
@@ -232,6 +240,7 @@ public record TrainingOptions(
     boolean lowerCaseForms;
     int maxPrefixLength;
     double minTagShare;
+    boolean lowercaseMidSentenceFirstWord;
 
     Editable(TrainingOptions o) {
       order = o.order;
@@ -250,12 +259,13 @@ public record TrainingOptions(
       lowerCaseForms = o.lowerCaseForms;
       maxPrefixLength = o.maxPrefixLength;
       minTagShare = o.minTagShare;
+      lowercaseMidSentenceFirstWord = o.lowercaseMidSentenceFirstWord;
     }
 
     TrainingOptions build() {
       return new TrainingOptions(order, maxSuffixLength, rareWordMaxCount, suffixWeightRule, suffixWeight,
           openClassMinShare, shapeClasses, capitalisationStates, contextEmissions, lowercaseFirstWord, contextMinCount,
-          latentRounds, unknownWordPrior, lowerCaseForms, maxPrefixLength, minTagShare);
+          latentRounds, unknownWordPrior, lowerCaseForms, maxPrefixLength, minTagShare, lowercaseMidSentenceFirstWord);
     }
   }
 
@@ -273,6 +283,7 @@ public record TrainingOptions(
     m.put("option.capitalisationStates", Boolean.toString(capitalisationStates));
     m.put("option.contextEmissions", Boolean.toString(contextEmissions));
     m.put("option.lowercaseFirstWord", Boolean.toString(lowercaseFirstWord));
+    m.put("option.lowercaseMidSentenceFirstWord", Boolean.toString(lowercaseMidSentenceFirstWord));
     m.put("option.contextMinCount", Integer.toString(contextMinCount));
     m.put("option.latentRounds", Integer.toString(latentRounds));
     m.put("option.lowerCaseForms", Boolean.toString(lowerCaseForms));

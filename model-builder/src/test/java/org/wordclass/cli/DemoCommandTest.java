@@ -195,9 +195,23 @@ class DemoCommandTest {
   void outputExplainsAndMentionsTheTags() {
     // the explanation is wrapped, so compare with line breaks as spaces
     String out = text.out().replaceAll("\\s+", " ");
-    for (String expected : new String[] {"hidden Markov model", "Legend", "tagged", "reader", "VERB", "NOUN", "PROPN!"}) {
+    for (String expected : new String[] {"hidden Markov model", "Legend", "tagged", "reader", "VERB", "NOUN", "PROPN"}) {
       assertTrue(out.contains(expected), expected + " in\n" + out);
     }
+    assertTrue(out.matches(".* [A-Z]+! .*"), "a disagreement of tagger and reader marked with ! in\n" + out);
+  }
+
+  /**
+   * Notice 02 (our invented notice) opens with the imperative "Book early"; the reader's class,
+   * VERB, is the demo's own reader column. EWT train has "Book" only in mid-sentence, as a name,
+   * so it came out PROPN until capitalised first words known only from mid-sentence were looked
+   * up in lower case. As "book" the bundled model still prefers NOUN to VERB there (0.58 against
+   * 0.42), so what this checks is that the name is gone, not that the verb is found.
+   */
+  @Test
+  void sentenceInitialBookIsNoLongerTakenForAName() {
+    assertEquals("VERB", notice("02").readerClass("book"));
+    assertFalse(tagsOf("02", "book").contains("PROPN"), tagsOf("02", "book").toString());
   }
 
   @Test
