@@ -3,6 +3,7 @@ package org.wordclass.decoding;
 import java.util.Arrays;
 import org.wordclass.model.HmmModel;
 import org.wordclass.model.Lexicon;
+import org.wordclass.model.Spelling;
 import org.wordclass.model.StateSpace;
 import org.wordclass.model.UnknownWordModel;
 
@@ -82,7 +83,7 @@ public final class Lattice {
    */
   public void add(char[] buf, int off, int len, int tag) {
     ensureTokenCapacity(size + 1);
-    int flags = splitsByCapital && size > 0 && startsWithCapital(buf, off, len) ? StateSpace.CAPITALISED : 0;
+    int flags = splitsByCapital && size > 0 && Spelling.startsWithCapital(buf, off, len) ? StateSpace.CAPITALISED : 0;
     int word = lookup(buf, off, len);
     wordId[size] = word;
     int start = candidateStart[size];
@@ -113,10 +114,6 @@ public final class Lattice {
     return (tag < 0 || states.tagOf(state) == tag) && (anyCase || !splitsByCapital || states.flags(state) == flags);
   }
 
-  private static boolean startsWithCapital(char[] buf, int off, int len) {
-    return len > 0 && (Character.isUpperCase(buf[off]) || Character.isTitleCase(buf[off]));
-  }
-
   private CandidateSource sourceOf(int word) {
     if (word < 0) {
       return CandidateSource.UNKNOWN;
@@ -132,13 +129,11 @@ public final class Lattice {
     Lexicon lexicon = model.lexicon();
     int word = lexicon.lookup(buf, off, len);
     foundLowerCased = false;
-    if (word < 0 && size == 0 && model.cues().lowercaseFirstWord() && startsWithCapital(buf, off, len)) {
+    if (word < 0 && size == 0 && model.cues().lowercaseFirstWord() && Spelling.startsWithCapital(buf, off, len)) {
       if (lowerCased.length < len) {
         lowerCased = new char[Math.max(len, 2 * lowerCased.length)];
       }
-      for (int i = 0; i < len; i++) {
-        lowerCased[i] = Character.toLowerCase(buf[off + i]);
-      }
+      Spelling.lowerCase(buf, off, len, lowerCased);
       word = lexicon.lookup(lowerCased, 0, len);
       foundLowerCased = word >= 0;
     }

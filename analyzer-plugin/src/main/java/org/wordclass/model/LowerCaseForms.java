@@ -8,7 +8,7 @@ import java.util.Arrays;
  * probable tag of a word is that of its state {@code s} with the highest {@code P(w|s) P(s)},
  * that is the state it was seen with most often in training.
  *
- * <p>Lower-casing is {@link Character#toLowerCase(char)} character by character, done on the fly
+ * <p>Lower-casing is {@link Spelling#lowerCase(char)} character by character, done on the fly
  * while hashing and comparing, so a lookup allocates nothing. An open-addressing hash table over
  * the lexicon's own characters, built once from the lexicon when a model is loaded (derived data:
  * a model file does not store it). Immutable and safe to share between threads.
@@ -38,7 +38,7 @@ public final class LowerCaseForms {
     int[] tags = new int[lexicon.size()];
     int count = 0;
     for (int w = 0; w < lexicon.size(); w++) {
-      if (lexiconStart[w + 1] == lexiconStart[w] || !isLowerCase(lexiconStart[w], lexiconStart[w + 1])) {
+      if (lexiconStart[w + 1] == lexiconStart[w] || !Spelling.isLowerCase(chars, lexiconStart[w], lexiconStart[w + 1] - lexiconStart[w])) {
         continue;
       }
       int best = -1;
@@ -71,15 +71,6 @@ public final class LowerCaseForms {
       slots[slot] = i;
       slotHash[slot] = h;
     }
-  }
-
-  private boolean isLowerCase(int from, int to) {
-    for (int i = from; i < to; i++) {
-      if (Character.toLowerCase(chars[i]) != chars[i]) {
-        return false;
-      }
-    }
-    return true;
   }
 
   /**
@@ -116,7 +107,7 @@ public final class LowerCaseForms {
       return false;
     }
     for (int i = 0; i < len; i++) {
-      if (chars[start + i] != Character.toLowerCase(buf[off + i])) {
+      if (chars[start + i] != Spelling.lowerCase(buf[off + i])) {
         return false;
       }
     }
@@ -127,7 +118,7 @@ public final class LowerCaseForms {
   private static int hash(char[] buf, int off, int len) {
     int h = 0x9747b28c;
     for (int i = off, end = off + len; i < end; i++) {
-      h = 31 * h + Character.toLowerCase(buf[i]);
+      h = 31 * h + Spelling.lowerCase(buf[i]);
     }
     h ^= h >>> 16;
     h *= 0x85ebca6b;

@@ -244,7 +244,7 @@ public final class UnknownWordModel {
    * @return length of the longest ending that was found in the counts
    */
   public int logEmissions(char[] buf, int off, int len, double[] scratch, double[] out) {
-    return logEmissions(buf, off, len, startsWithCapital(buf, off, len), scratch, out);
+    return logEmissions(buf, off, len, Spelling.startsWithCapital(buf, off, len), scratch, out);
   }
 
   /**
@@ -314,7 +314,7 @@ public final class UnknownWordModel {
     SuffixTrie trie = prefixTries[group];
     int node = 0;
     for (int depth = 0, next; depth < Math.min(len, maxPrefixLength)
-        && (next = trie.child(node, Character.toLowerCase(buf[off + depth]))) >= 0; depth++) {
+        && (next = trie.child(node, Spelling.lowerCase(buf[off + depth]))) >= 0; depth++) {
       node = next;
     }
     double[] kept = (double[]) NODE.getAcquire(beginningFactors[group], node);
@@ -326,10 +326,6 @@ public final class UnknownWordModel {
       NODE.setRelease(beginningFactors[group], node, kept);
     }
     return kept;
-  }
-
-  private static boolean startsWithCapital(char[] buf, int off, int len) {
-    return len > 0 && (Character.isUpperCase(buf[off]) || Character.isTitleCase(buf[off]));
   }
 
   /**
@@ -396,7 +392,7 @@ public final class UnknownWordModel {
       if (depth == Math.min(len, maxPrefixLength)) {
         break;
       }
-      node = trie.child(node, Character.toLowerCase(buf[off + depth]));
+      node = trie.child(node, Spelling.lowerCase(buf[off + depth]));
       if (node < 0) {
         break;
       }

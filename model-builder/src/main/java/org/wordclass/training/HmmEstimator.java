@@ -11,6 +11,7 @@ import org.wordclass.model.HmmModel;
 import org.wordclass.model.Lexicon;
 import org.wordclass.model.LowerCaseFormCue;
 import org.wordclass.model.LowerCaseForms;
+import org.wordclass.model.Spelling;
 import org.wordclass.model.StateSpace;
 import org.wordclass.model.SuffixTrie;
 import org.wordclass.model.TagSet;
@@ -282,7 +283,7 @@ public final class HmmEstimator {
   static String lowerCasedReversed(char[] chars) {
     char[] out = new char[chars.length];
     for (int i = 0; i < chars.length; i++) {
-      out[chars.length - 1 - i] = Character.toLowerCase(chars[i]);
+      out[chars.length - 1 - i] = Spelling.lowerCase(chars[i]);
     }
     return new String(out);
   }
