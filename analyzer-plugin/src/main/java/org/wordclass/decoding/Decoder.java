@@ -103,7 +103,7 @@ public final class Decoder {
   }
 
   /** The state of candidate {@code k}, or the boundary before the sequence. */
-  private int tagAt(int position, int k) {
+  private int stateAt(int position, int k) {
     return position < 0 ? boundary : lattice.candidateState(position, k);
   }
 
@@ -198,7 +198,7 @@ public final class Decoder {
     double top = Double.NEGATIVE_INFINITY;
     int arg = 0;
     for (int k = 0; k < count(n - 1); k++) {
-      double s = score[last + k] + logBigram[tagAt(n - 1, k) * states + boundary];
+      double s = score[last + k] + logBigram[stateAt(n - 1, k) * states + boundary];
       if (s > top) {
         top = s;
         arg = k;
@@ -266,7 +266,7 @@ public final class Decoder {
     int argK = 0;
     for (int j = 0; j < kp; j++) {
       for (int k = 0; k < kc; k++) {
-        double s = score[last + j * kc + k] + logTrigram[(tagAt(n - 2, j) * states + tagAt(n - 1, k)) * states + boundary];
+        double s = score[last + j * kc + k] + logTrigram[(stateAt(n - 2, j) * states + stateAt(n - 1, k)) * states + boundary];
         if (s > top) {
           top = s;
           argJ = j;
@@ -296,11 +296,11 @@ public final class Decoder {
     }
     int kp = count(i - 1);
     int prev = stateStart[i - 1];
-    int last = tagAt(i - 1, j) * states + tagAt(i, k);
+    int last = stateAt(i - 1, j) * states + stateAt(i, k);
     double top = Double.NEGATIVE_INFINITY;
     int arg = 0;
     for (int h = 0; h < kpp; h++) {
-      double s = score[prev + h * kp + j] + logTrigram[tagAt(i - 2, h) * states * states + last];
+      double s = score[prev + h * kp + j] + logTrigram[stateAt(i - 2, h) * states * states + last];
       if (s > top) {
         top = s;
         arg = h;
@@ -430,7 +430,7 @@ public final class Decoder {
 
   private void addExpectedBigrams(double[] counts, int n) {
     for (int k = 0; k < count(0); k++) {
-      counts[boundary * states + tagAt(0, k)] += posterior(0, k);
+      counts[boundary * states + stateAt(0, k)] += posterior(0, k);
     }
     for (int i = 0; i + 1 < n; i++) {
       int here = stateStart[i];
@@ -442,21 +442,21 @@ public final class Decoder {
       double norm = 1.0 / (betaSum[i] * overlap(here, count(i)));
       for (int j = 0; j < count(i); j++) {
         double a = alpha[here + j] * norm;
-        int row = tagAt(i, j) * states;
+        int row = stateAt(i, j) * states;
         for (int k = 0; k < kk; k++) {
-          int index = row + tagAt(i + 1, k);
+          int index = row + stateAt(i + 1, k);
           counts[index] += a * bigram[index] * scaledEmission[emit + j * stride + k] * beta[next + k];
         }
       }
     }
     for (int k = 0; k < count(n - 1); k++) {
-      counts[tagAt(n - 1, k) * states + boundary] += posterior(n - 1, k);
+      counts[stateAt(n - 1, k) * states + boundary] += posterior(n - 1, k);
     }
   }
 
   private void addExpectedTrigrams(double[] counts, int n) {
     for (int k = 0; k < count(0); k++) {
-      counts[(boundary * states + boundary) * states + tagAt(0, k)] += posterior(0, k);
+      counts[(boundary * states + boundary) * states + stateAt(0, k)] += posterior(0, k);
     }
     for (int i = 0; i + 1 < n; i++) {
       int kh = count(i - 1);
@@ -468,12 +468,12 @@ public final class Decoder {
       int stride = lattice.pairStride(i + 1);
       double norm = 1.0 / (betaSum[i] * overlap(here, kh * kj));
       for (int h = 0; h < kh; h++) {
-        int th = tagAt(i - 1, h);
+        int th = stateAt(i - 1, h);
         for (int j = 0; j < kj; j++) {
           double a = alpha[here + h * kj + j] * norm;
-          int base = (th * states + tagAt(i, j)) * states;
+          int base = (th * states + stateAt(i, j)) * states;
           for (int k = 0; k < kk; k++) {
-            int index = base + tagAt(i + 1, k);
+            int index = base + stateAt(i + 1, k);
             counts[index] += a * trigram[index] * scaledEmission[emit + j * stride + k] * beta[next + j * kk + k];
           }
         }
@@ -484,10 +484,10 @@ public final class Decoder {
     int last = stateStart[n - 1];
     double norm = 1.0 / overlap(last, kj * kk);
     for (int j = 0; j < kj; j++) {
-      int base = (tagAt(n - 2, j) * states) * states;
+      int base = (stateAt(n - 2, j) * states) * states;
       for (int k = 0; k < kk; k++) {
         int state = last + j * kk + k;
-        counts[base + tagAt(n - 1, k) * states + boundary] += alpha[state] * beta[state] * norm;
+        counts[base + stateAt(n - 1, k) * states + boundary] += alpha[state] * beta[state] * norm;
       }
     }
   }
@@ -530,10 +530,10 @@ public final class Decoder {
       int kc = count(i);
       double sum = 0;
       for (int k = 0; k < kc; k++) {
-        int tk = tagAt(i, k);
+        int tk = stateAt(i, k);
         double a = 0;
         for (int j = 0; j < kp; j++) {
-          a += (i == 0 ? 1 : alpha[prev + j]) * bigram[tagAt(i - 1, j) * states + tk] * scaledEmission[emit + j * stride + k];
+          a += (i == 0 ? 1 : alpha[prev + j]) * bigram[stateAt(i - 1, j) * states + tk] * scaledEmission[emit + j * stride + k];
         }
         alpha[here + k] = a;
         sum += a;
@@ -544,7 +544,7 @@ public final class Decoder {
     double end = 0;
     double sum = 0;
     for (int k = 0; k < count(n - 1); k++) {
-      double b = bigram[tagAt(n - 1, k) * states + boundary];
+      double b = bigram[stateAt(n - 1, k) * states + boundary];
       beta[last + k] = b;
       end += alpha[last + k] * b;
       sum += b;
@@ -558,10 +558,10 @@ public final class Decoder {
       int kn = count(i + 1);
       sum = 0;
       for (int j = 0; j < count(i); j++) {
-        int tj = tagAt(i, j);
+        int tj = stateAt(i, j);
         double b = 0;
         for (int k = 0; k < kn; k++) {
-          b += bigram[tj * states + tagAt(i + 1, k)] * scaledEmission[emit + j * stride + k] * beta[next + k];
+          b += bigram[tj * states + stateAt(i + 1, k)] * scaledEmission[emit + j * stride + k] * beta[next + k];
         }
         beta[here + j] = b;
         sum += b;
@@ -591,12 +591,12 @@ public final class Decoder {
       int stride = lattice.pairStride(i);
       double sum = 0;
       for (int j = 0; j < kp; j++) {
-        int tj = tagAt(i - 1, j);
+        int tj = stateAt(i - 1, j);
         for (int k = 0; k < kc; k++) {
-          int tk = tagAt(i, k);
+          int tk = stateAt(i, k);
           double a = 0;
           for (int h = 0; h < kpp; h++) {
-            a += (i == 0 ? 1 : alpha[prev + h * kp + j]) * trigram[(tagAt(i - 2, h) * states + tj) * states + tk];
+            a += (i == 0 ? 1 : alpha[prev + h * kp + j]) * trigram[(stateAt(i - 2, h) * states + tj) * states + tk];
           }
           a *= scaledEmission[emit + j * stride + k];
           alpha[here + j * kc + k] = a;
@@ -612,7 +612,7 @@ public final class Decoder {
     double sum = 0;
     for (int j = 0; j < kp; j++) {
       for (int k = 0; k < kc; k++) {
-        double b = trigram[(tagAt(n - 2, j) * states + tagAt(n - 1, k)) * states + boundary];
+        double b = trigram[(stateAt(n - 2, j) * states + stateAt(n - 1, k)) * states + boundary];
         beta[last + j * kc + k] = b;
         end += alpha[last + j * kc + k] * b;
         sum += b;
@@ -630,12 +630,12 @@ public final class Decoder {
       int stride = lattice.pairStride(i + 1);
       sum = 0;
       for (int h = 0; h < kh; h++) {
-        int th = tagAt(i - 1, h);
+        int th = stateAt(i - 1, h);
         for (int j = 0; j < kj; j++) {
-          int base = (th * states + tagAt(i, j)) * states;
+          int base = (th * states + stateAt(i, j)) * states;
           double b = 0;
           for (int k = 0; k < kk; k++) {
-            b += trigram[base + tagAt(i + 1, k)] * scaledEmission[emit + j * stride + k] * beta[next + j * kk + k];
+            b += trigram[base + stateAt(i + 1, k)] * scaledEmission[emit + j * stride + k] * beta[next + j * kk + k];
           }
           beta[here + h * kj + j] = b;
           sum += b;

@@ -142,13 +142,13 @@ public final class Lattice {
 
   private int addKnown(int word, int flags, int tag, int start) {
     Lexicon lexicon = model.lexicon();
-    int n = lexicon.tagCount(word);
+    int n = lexicon.stateCount(word);
     ensureCandidateCapacity(start + n);
     int end = start;
     for (int pass = 0; pass < 2 && end == start; pass++) {
       // first pass: states that match how the token is written; if none do, all of them
       for (int k = 0; k < n; k++) {
-        int state = lexicon.tag(word, k);
+        int state = lexicon.state(word, k);
         if (admits(state, tag, flags, pass == 1)) {
           candidateState[end] = state;
           candidateLogEmission[end] = lexicon.logEmission(word, k);
@@ -296,7 +296,7 @@ public final class Lattice {
 
   /**
    * Which of its word's lexicon states the {@code k}-th candidate of {@code position} is (its
-   * index {@code k'} for {@link org.wordclass.model.Lexicon#tag(int, int)}), or -1 for an unknown
+   * index {@code k'} for {@link org.wordclass.model.Lexicon#state(int, int)}), or -1 for an unknown
    * word. Not always {@code k}: where tags are split by capitalisation, only the states that
    * match how the token is written are candidates.
    */

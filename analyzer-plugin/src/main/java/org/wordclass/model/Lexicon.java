@@ -5,14 +5,15 @@ import java.util.Arrays;
 import java.util.List;
 
 /**
- * The words a model has seen, each with the tags it may take and their emission
- * log-probabilities {@code log P(word | tag)}. Restricting a known word to its own tags (the
- * lexicon constraint) keeps decoding exact and fast.
+ * The words a model has seen, each with the states it may take and their emission
+ * log-probabilities {@code log P(word | state)}; a state is a tag, or a tag split further (by
+ * capitalisation or latent sub-states, see {@link StateSpace}). Restricting a known word to its
+ * own states (the lexicon constraint) keeps decoding exact and fast.
  *
  * <p>Words live in one {@code char[]} and are found through an open-addressing hash table that
  * is probed straight from a token's char buffer, so a lookup builds no String and allocates
  * nothing. Memory: about 2 bytes per character, 20 to 30 bytes per word (the hash table is kept
- * between three-eighths and three-quarters full), 10 bytes per word/tag pair, and 4 bytes per
+ * between three-eighths and three-quarters full), 10 bytes per word/state pair, and 4 bytes per
  * state for each pair with context emissions (one row of {@link #contextLogEmissionInRow}).
  * Words put in by a {@link UserLexicon} are marked ({@link #isUserListed}), so that decoding
  * can say a token's classes were fixed by the user. Immutable and safe to share between threads.
@@ -23,22 +24,22 @@ public final class Lexicon {
    * for each state optionally its emission log-probabilities after particular previous states
    * ({@code contextStates[k]} ascending, {@code contextLogEmissions[k]} beside them).
    */
-  public record Entry(String word, int[] tags, float[] logEmissions, int[][] contextStates, float[][] contextLogEmissions) {
+  public record Entry(String word, int[] states, float[] logEmissions, int[][] contextStates, float[][] contextLogEmissions) {
     private static final int[][] NO_STATES = new int[0][];
     private static final float[][] NO_EMISSIONS = new float[0][];
 
     public Entry {
-      if (tags.length == 0 || tags.length != logEmissions.length) {
-        throw new IllegalArgumentException("word '" + word + "' needs one or more tags with one emission each");
+      if (states.length == 0 || states.length != logEmissions.length) {
+        throw new IllegalArgumentException("word '" + word + "' needs one or more states with one emission each");
       }
-      if (contextStates.length != contextLogEmissions.length || (contextStates.length != 0 && contextStates.length != tags.length)) {
+      if (contextStates.length != contextLogEmissions.length || (contextStates.length != 0 && contextStates.length != states.length)) {
         throw new IllegalArgumentException("word '" + word + "' has context emissions for some of its states only");
       }
     }
 
     /** An entry without context-dependent emissions. */
-    public Entry(String word, int[] tags, float[] logEmissions) {
-      this(word, tags, logEmissions, NO_STATES, NO_EMISSIONS);
+    public Entry(String word, int[] states, float[] logEmissions) {
+      this(word, states, logEmissions, NO_STATES, NO_EMISSIONS);
     }
 
     /** Whether the entry has context-dependent emissions. */
@@ -55,8 +56,8 @@ public final class Lexicon {
    * array rather than two, so a probe touches one cache line.
    */
   private final long[] slots;
-  private final int[] tagStart;
-  private final short[] tagIds;
+  private final int[] stateStart;
+  private final short[] stateIds;
   private final float[] logEmissions;
   /** Per word/state pair {@code p}: its contexts are {@code contextStart[p] .. contextStart[p+1]}. */
   private final int[] contextStart;
@@ -91,8 +92,8 @@ public final class Lexicon {
     Builder builder = new Builder(entries.size());
     for (Entry e : entries) {
       builder.startWord(e.word(), e.hasContexts());
-      for (int k = 0; k < e.tags().length; k++) {
-        builder.addState(e.tags()[k], e.logEmissions()[k]);
+      for (int k = 0; k < e.states().length; k++) {
+        builder.addState(e.states()[k], e.logEmissions()[k]);
         for (int j = 0; e.hasContexts() && j < e.contextStates()[k].length; j++) {
           builder.addContext(e.contextStates()[k][j], e.contextLogEmissions()[k][j]);
         }
@@ -113,8 +114,8 @@ public final class Lexicon {
     private int[] wordStart;
     private boolean[] hasContexts;
     private int words;
-    private int[] tagStart;
-    private short[] tagIds;
+    private int[] stateStart;
+    private short[] stateIds;
     private float[] logEmissions;
     private int[] contextStart;
     private int tags;
@@ -127,9 +128,9 @@ public final class Lexicon {
       int n = Math.max(16, expectedWords);
       chars = new char[8 * n];
       wordStart = new int[n + 1];
-      tagStart = new int[n + 1];
+      stateStart = new int[n + 1];
       hasContexts = new boolean[n];
-      tagIds = new short[2 * n];
+      stateIds = new short[2 * n];
       logEmissions = new float[2 * n];
       contextStart = new int[2 * n + 1];
       contextState = new short[n];
@@ -142,7 +143,7 @@ public final class Lexicon {
       if (words + 1 >= wordStart.length) {
         int grown = 2 * wordStart.length;
         wordStart = Arrays.copyOf(wordStart, grown);
-        tagStart = Arrays.copyOf(tagStart, grown);
+        stateStart = Arrays.copyOf(stateStart, grown);
         hasContexts = Arrays.copyOf(hasContexts, grown);
       }
       if (charCount + word.length() > chars.length) {
@@ -151,7 +152,7 @@ public final class Lexicon {
       word.getChars(0, word.length(), chars, charCount);
       wordStart[words] = charCount;
       charCount += word.length();
-      tagStart[words] = tags;
+      stateStart[words] = tags;
       hasContexts[words] = withContexts;
       words++;
       lastWord = word;
@@ -164,11 +165,11 @@ public final class Lexicon {
       }
       if (tags + 1 >= contextStart.length) {
         int grown = 2 * contextStart.length;
-        tagIds = Arrays.copyOf(tagIds, grown);
+        stateIds = Arrays.copyOf(stateIds, grown);
         logEmissions = Arrays.copyOf(logEmissions, grown);
         contextStart = Arrays.copyOf(contextStart, grown);
       }
-      tagIds[tags] = (short) state;
+      stateIds[tags] = (short) state;
       logEmissions[tags] = logEmission;
       contextStart[tags] = contexts;
       tags++;
@@ -176,7 +177,7 @@ public final class Lexicon {
 
     /** Adds an emission of the current word's last state after the previous state {@code previous}. */
     public void addContext(int previous, float logEmission) {
-      if (tags == 0 || !hasContexts[words - 1] || tagStart[words - 1] == tags) {
+      if (tags == 0 || !hasContexts[words - 1] || stateStart[words - 1] == tags) {
         throw new IllegalArgumentException("word '" + lastWord + "' has context emissions for some of its states only");
       }
       if (contexts == contextState.length) {
@@ -194,8 +195,8 @@ public final class Lexicon {
     }
 
     private void finishWord() {
-      if (words > 0 && tagStart[words - 1] == tags) {
-        throw new IllegalArgumentException("word '" + lastWord + "' needs one or more tags with one emission each");
+      if (words > 0 && stateStart[words - 1] == tags) {
+        throw new IllegalArgumentException("word '" + lastWord + "' needs one or more states with one emission each");
       }
     }
   }
@@ -210,10 +211,10 @@ public final class Lexicon {
     chars = Arrays.copyOf(b.chars, b.charCount);
     wordStart = Arrays.copyOf(b.wordStart, words + 1);
     wordStart[words] = b.charCount;
-    tagStart = Arrays.copyOf(b.tagStart, words + 1);
-    tagStart[words] = b.tags;
+    stateStart = Arrays.copyOf(b.stateStart, words + 1);
+    stateStart[words] = b.tags;
     hasContexts = Arrays.copyOf(b.hasContexts, words);
-    tagIds = Arrays.copyOf(b.tagIds, b.tags);
+    stateIds = Arrays.copyOf(b.stateIds, b.tags);
     logEmissions = Arrays.copyOf(b.logEmissions, b.tags);
     contextStart = Arrays.copyOf(b.contextStart, b.tags + 1);
     contextState = Arrays.copyOf(b.contextState, b.contexts);
@@ -352,19 +353,19 @@ public final class Lexicon {
     return new String(chars, wordStart[word], wordStart[word + 1] - wordStart[word]);
   }
 
-  /** Number of tags the word may take. */
-  public int tagCount(int word) {
-    return tagStart[word + 1] - tagStart[word];
+  /** Number of states the word may take (its tags, in a model with one state per tag). */
+  public int stateCount(int word) {
+    return stateStart[word + 1] - stateStart[word];
   }
 
-  /** The {@code k}-th tag of the word. */
-  public int tag(int word, int k) {
-    return tagIds[tagStart[word] + k];
+  /** The {@code k}-th state of the word, ascending in {@code k}. */
+  public int state(int word, int k) {
+    return stateIds[stateStart[word] + k];
   }
 
-  /** Emission log-probability of the word under its {@code k}-th tag. */
+  /** Emission log-probability of the word in its {@code k}-th state. */
   public float logEmission(int word, int k) {
-    return logEmissions[tagStart[word] + k];
+    return logEmissions[stateStart[word] + k];
   }
 
   /** Whether the word's classes were set by a user lexicon rather than learnt by the model. */
@@ -401,7 +402,7 @@ public final class Lexicon {
    * per candidate and then reads one value per previous state.
    */
   public int contextRow(int word, int k) {
-    return contextRow[tagStart[word] + k];
+    return contextRow[stateStart[word] + k];
   }
 
   /** The emission in {@code row} right after state {@code previous}, or NaN if that context was not seen. */
@@ -415,32 +416,32 @@ public final class Lexicon {
   }
 
   /**
-   * Position of the word's {@code k}-th tag among all {@link #pairCount()} word/tag pairs, for
+   * Position of the word's {@code k}-th state among all {@link #pairCount()} word/state pairs, for
    * tools that keep one number per pair in a flat array (such as expected counts).
    */
   public int pairIndex(int word, int k) {
-    return tagStart[word] + k;
+    return stateStart[word] + k;
   }
 
-  /** Total number of word/tag pairs. */
+  /** Total number of word/state pairs. */
   public int pairCount() {
-    return tagIds.length;
+    return stateIds.length;
   }
 
   /** The entries in id order, for writing and inspecting. */
   public List<Entry> entries() {
     List<Entry> out = new ArrayList<>(size());
     for (int w = 0; w < size(); w++) {
-      int n = tagCount(w);
-      int[] tags = new int[n];
+      int n = stateCount(w);
+      int[] states = new int[n];
       float[] emissions = new float[n];
       int[][] contexts = new int[hasContexts[w] ? n : 0][];
       float[][] contextEmissions = new float[hasContexts[w] ? n : 0][];
       for (int k = 0; k < n; k++) {
-        tags[k] = tag(w, k);
+        states[k] = state(w, k);
         emissions[k] = logEmission(w, k);
         if (hasContexts[w]) {
-          int pair = tagStart[w] + k;
+          int pair = stateStart[w] + k;
           int from = contextStart[pair];
           int to = contextStart[pair + 1];
           contexts[k] = new int[to - from];
@@ -450,14 +451,14 @@ public final class Lexicon {
           }
         }
       }
-      out.add(new Entry(word(w), tags, emissions, contexts, contextEmissions));
+      out.add(new Entry(word(w), states, emissions, contexts, contextEmissions));
     }
     return out;
   }
 
   /** Approximate heap size in bytes. */
   public long ramBytesUsed() {
-    return 2L * chars.length + 4L * (wordStart.length + 2 * slots.length + tagStart.length) + 10L * tagIds.length
+    return 2L * chars.length + 4L * (wordStart.length + 2 * slots.length + stateStart.length) + 10L * stateIds.length
         + 6L * contextState.length + (userListed == null ? 1 : 2) * words() + 4L * (contextRow.length + denseContext.length);
   }
 

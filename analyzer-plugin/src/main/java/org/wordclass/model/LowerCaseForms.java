@@ -43,8 +43,8 @@ public final class LowerCaseForms {
       }
       int best = -1;
       double bestScore = Double.NEGATIVE_INFINITY;
-      for (int k = 0; k < lexicon.tagCount(w); k++) {
-        int state = lexicon.tag(w, k);
+      for (int k = 0; k < lexicon.stateCount(w); k++) {
+        int state = lexicon.state(w, k);
         double score = lexicon.logEmission(w, k) + logStatePrior[state];
         if (best < 0 || score > bestScore) {
           best = state;

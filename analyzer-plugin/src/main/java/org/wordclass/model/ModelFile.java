@@ -121,10 +121,10 @@ public final class ModelFile {
     out.writeVInt(lexicon.size());
     for (Lexicon.Entry e : lexicon.entries()) {
       out.writeString(e.word());
-      out.writeVInt(e.tags().length);
+      out.writeVInt(e.states().length);
       out.writeByte((byte) (e.hasContexts() ? 1 : 0));
-      for (int k = 0; k < e.tags().length; k++) {
-        out.writeVInt(e.tags()[k]);
+      for (int k = 0; k < e.states().length; k++) {
+        out.writeVInt(e.states()[k]);
         out.writeInt(Float.floatToIntBits(e.logEmissions()[k]));
         if (e.hasContexts()) {
           out.writeVInt(e.contextStates()[k].length);
@@ -139,7 +139,7 @@ public final class ModelFile {
 
   private static void writeUnknownWords(DataOutput out, UnknownWordModel model, int tagCount) throws IOException {
     out.writeLong(Double.doubleToLongBits(model.theta()));
-    out.writeVInt(model.maxSuffixLength());
+    out.writeVInt(model.maxEndingLength());
     int[] open = model.openTags();
     out.writeVInt(open.length);
     for (int t : open) {
@@ -151,8 +151,8 @@ public final class ModelFile {
     for (int t : model.trieOfShape()) {
       out.writeVInt(t);
     }
-    out.writeVInt(model.tries().length);
-    for (SuffixTrie trie : model.tries()) {
+    out.writeVInt(model.endingTries().length);
+    for (AffixTrie trie : model.endingTries()) {
       writeTrie(out, trie);
     }
     LowerCaseFormCue cue = model.lowerCaseForms();
@@ -161,15 +161,15 @@ public final class ModelFile {
       writeDoubles(out, cue.logStatePrior());
       writeDoubles(out, cue.factors());
     }
-    out.writeVInt(model.maxPrefixLength());
-    if (model.maxPrefixLength() > 0) {
-      for (SuffixTrie trie : model.prefixTries()) {
+    out.writeVInt(model.maxBeginningLength());
+    if (model.maxBeginningLength() > 0) {
+      for (AffixTrie trie : model.beginningTries()) {
         writeTrie(out, trie);
       }
     }
   }
 
-  private static void writeTrie(DataOutput out, SuffixTrie trie) throws IOException {
+  private static void writeTrie(DataOutput out, AffixTrie trie) throws IOException {
     int nodes = trie.nodeCount();
     out.writeVInt(nodes);
     for (int n = 0; n < nodes; n++) {
@@ -425,7 +425,7 @@ public final class ModelFile {
       Lexicon lexicon, StateSpace states)
       throws IOException {
     double theta = Double.longBitsToDouble(in.readLong());
-    int maxSuffix = vInt(in);
+    int maxEnding = vInt(in);
     int openCount = limits.count(vInt(in), 1, "open tags");
     int[] open = new int[openCount];
     for (int i = 0; i < openCount; i++) {
@@ -439,8 +439,8 @@ public final class ModelFile {
     for (int i = 0; i < trieOfShape.length; i++) {
       trieOfShape[i] = vInt(in);
     }
-    int trieCount = limits.count(vInt(in), 1, "suffix tries");
-    SuffixTrie[] tries = new SuffixTrie[trieCount];
+    int trieCount = limits.count(vInt(in), 1, "ending tries");
+    AffixTrie[] tries = new AffixTrie[trieCount];
     for (int i = 0; i < trieCount; i++) {
       tries[i] = readTrie(in, limits, tagCount);
     }
@@ -450,19 +450,19 @@ public final class ModelFile {
       double[] factors = readDoubles(in, limits.count((long) tagCount * openCount, 8, "lower-case form factors"));
       cue = new LowerCaseFormCue(logStatePrior, factors, tagCount, openCount, lexicon, states);
     }
-    int maxPrefix = version >= VERSION_CAPITALISED_PRIORS ? vInt(in) : 0;
-    SuffixTrie[] prefixTries = null;
-    if (maxPrefix > 0) {
-      prefixTries = new SuffixTrie[] {readTrie(in, limits, tagCount), readTrie(in, limits, tagCount)};
+    int maxBeginning = version >= VERSION_CAPITALISED_PRIORS ? vInt(in) : 0;
+    AffixTrie[] beginningTries = null;
+    if (maxBeginning > 0) {
+      beginningTries = new AffixTrie[] {readTrie(in, limits, tagCount), readTrie(in, limits, tagCount)};
     }
-    return new UnknownWordModel(theta, maxSuffix, open, logPrior, logPriorCapitalised, base, trieOfShape, tries, cue,
-        maxPrefix, prefixTries);
+    return new UnknownWordModel(theta, maxEnding, open, logPrior, logPriorCapitalised, base, trieOfShape, tries, cue,
+        maxBeginning, beginningTries);
   }
 
-  private static SuffixTrie readTrie(DataInput in, Limits limits, int tagCount) throws IOException {
-    int nodes = limits.count(vInt(in), 2, "suffix nodes");
+  private static AffixTrie readTrie(DataInput in, Limits limits, int tagCount) throws IOException {
+    int nodes = limits.count(vInt(in), 2, "trie nodes");
     if (nodes < 1) {
-      throw new CorruptIndexException("a suffix trie needs a root", "model");
+      throw new CorruptIndexException("a trie needs a root", "model");
     }
     int[] childStart = new int[nodes + 1];
     int[] countStart = new int[nodes + 1];
@@ -471,18 +471,18 @@ public final class ModelFile {
     IntList chars = new IntList();
     for (int n = 0; n < nodes; n++) {
       countStart[n] = countTags.size;
-      int counts = limits.count(vInt(in), 2, "counts of a suffix");
+      int counts = limits.count(vInt(in), 2, "counts of a trie node");
       for (int i = 0; i < counts; i++) {
         countTags.add(tagIndex(vInt(in), tagCount));
         countValues.add(vInt(in));
       }
       childStart[n] = chars.size;
-      int children = limits.count(vInt(in), 1, "children of a suffix");
+      int children = limits.count(vInt(in), 1, "children of a trie node");
       int previous = -1;
       for (int i = 0; i < children; i++) {
         int c = vInt(in);
         if (c <= previous || c > Character.MAX_VALUE) {
-          throw new CorruptIndexException("suffix characters out of order", "model");
+          throw new CorruptIndexException("trie characters out of order", "model");
         }
         chars.add(c);
         previous = c;
@@ -491,7 +491,7 @@ public final class ModelFile {
     countStart[nodes] = countTags.size;
     childStart[nodes] = chars.size;
     if (chars.size != nodes - 1) {
-      throw new CorruptIndexException("suffix trie with " + nodes + " nodes has " + chars.size + " edges", "model");
+      throw new CorruptIndexException("trie with " + nodes + " nodes has " + chars.size + " edges", "model");
     }
     char[] childChar = new char[chars.size];
     for (int i = 0; i < childChar.length; i++) {
@@ -501,7 +501,7 @@ public final class ModelFile {
     for (int i = 0; i < tagsOut.length; i++) {
       tagsOut[i] = (short) countTags.values[i];
     }
-    return new SuffixTrie(childStart, childChar, countStart, tagsOut, java.util.Arrays.copyOf(countValues.values, countValues.size));
+    return new AffixTrie(childStart, childChar, countStart, tagsOut, java.util.Arrays.copyOf(countValues.values, countValues.size));
   }
 
   /** Growable int array, so reading a trie does not box every number. */

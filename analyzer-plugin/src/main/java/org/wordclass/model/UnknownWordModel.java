@@ -18,7 +18,7 @@ import java.util.Arrays;
  *   <li>where the model has them, two further cues multiply that distribution: what the word's
  *       lower-case form mostly is, for a word written with a capital ({@link LowerCaseFormCue}),
  *       and the tags of rare words with the same first letters, {@code P(t | beginning) / P(t)}
- *       ({@link #prefixFactor}), as if beginning and ending were independent given the tag;
+ *       ({@link #beginningFactor}), as if beginning and ending were independent given the tag;
  *   <li>the result is inverted with Bayes' rule, {@code P(w|s) ∝ P(s|w) / P(s)}; the factor
  *       {@code P(w)} is the same for every tag of a token and cancels in decoding. The divisor
  *       is kept twice, for words written with a capital and for the others: where a model
@@ -39,17 +39,17 @@ import java.util.Arrays;
  */
 public final class UnknownWordModel {
   private final double theta;
-  private final int maxSuffixLength;
+  private final int maxEndingLength;
   private final int[] openTags;
   private final double[] logPrior;
   private final double[] logPriorCapitalised;
   private final double[] baseDistribution;
   private final int[] trieOfShape;
   private final LowerCaseFormCue lowerCaseForms;
-  private final int maxPrefixLength;
-  private final SuffixTrie[] prefixTries;
-  private final int[][] openOfPrefixCount;
-  private final SuffixTrie[] tries;
+  private final int maxBeginningLength;
+  private final AffixTrie[] beginningTries;
+  private final int[][] openOfBeginningCount;
+  private final AffixTrie[] endingTries;
   /**
    * Per trie, per count entry: the index of its tag among the open tags, or -1 for a closed
    * tag. Found once here rather than by a binary search for every count of every ending that
@@ -58,52 +58,52 @@ public final class UnknownWordModel {
   private final int[][] openOfCount;
   /** Per trie and node, {@code log P(t | ending)} over the open tags once a word has reached it, else null. */
   private final double[][][] endingDistribution;
-  /** Per beginning trie and node, the logarithm of {@link #prefixFactor} of each open tag once a word has reached it, else null. */
+  /** Per beginning trie and node, the logarithm of {@link #beginningFactor} of each open tag once a word has reached it, else null. */
   private final double[][][] beginningFactors;
   private static final VarHandle NODE = MethodHandles.arrayElementVarHandle(double[][].class);
 
   /**
    * @param theta weight of the shorter ending in successive abstraction
-   * @param maxSuffixLength longest ending consulted
+   * @param maxEndingLength longest ending consulted
    * @param openTags tags an unknown word may take, ascending
    * @param logPrior {@code log P(t)} over all training tokens, one per tag of the tag set, the
    *     divisor for every word
    * @param baseDistribution tag distribution over all rare words, one per open tag, summing to 1
-   * @param trieOfShape index into {@code tries} for each {@link WordShape} ordinal
-   * @param tries ending counts, one trie per group of shapes
+   * @param trieOfShape index into {@code endingTries} for each {@link WordShape} ordinal
+   * @param endingTries ending counts, one trie per group of shapes
    */
   public UnknownWordModel(
       double theta,
-      int maxSuffixLength,
+      int maxEndingLength,
       int[] openTags,
       double[] logPrior,
       double[] baseDistribution,
       int[] trieOfShape,
-      SuffixTrie[] tries) {
-    this(theta, maxSuffixLength, openTags, logPrior, logPrior, baseDistribution, trieOfShape, tries);
+      AffixTrie[] endingTries) {
+    this(theta, maxEndingLength, openTags, logPrior, logPrior, baseDistribution, trieOfShape, endingTries);
   }
 
   /**
    * @param theta weight of the shorter ending in successive abstraction
-   * @param maxSuffixLength longest ending consulted
+   * @param maxEndingLength longest ending consulted
    * @param openTags tags an unknown word may take, ascending
    * @param logPrior the log prior each tag's probability is divided by, one per tag of the tag
    *     set, for words not written with a capital (or in a state that does not say so)
    * @param logPriorCapitalised the same for words in the state of words written with a capital
    * @param baseDistribution tag distribution over all rare words, one per open tag, summing to 1
-   * @param trieOfShape index into {@code tries} for each {@link WordShape} ordinal
-   * @param tries ending counts, one trie per group of shapes
+   * @param trieOfShape index into {@code endingTries} for each {@link WordShape} ordinal
+   * @param endingTries ending counts, one trie per group of shapes
    */
   public UnknownWordModel(
       double theta,
-      int maxSuffixLength,
+      int maxEndingLength,
       int[] openTags,
       double[] logPrior,
       double[] logPriorCapitalised,
       double[] baseDistribution,
       int[] trieOfShape,
-      SuffixTrie[] tries) {
-    this(theta, maxSuffixLength, openTags, logPrior, logPriorCapitalised, baseDistribution, trieOfShape, tries, null);
+      AffixTrie[] endingTries) {
+    this(theta, maxEndingLength, openTags, logPrior, logPriorCapitalised, baseDistribution, trieOfShape, endingTries, null);
   }
 
   /**
@@ -112,38 +112,38 @@ public final class UnknownWordModel {
    */
   public UnknownWordModel(
       double theta,
-      int maxSuffixLength,
+      int maxEndingLength,
       int[] openTags,
       double[] logPrior,
       double[] logPriorCapitalised,
       double[] baseDistribution,
       int[] trieOfShape,
-      SuffixTrie[] tries,
+      AffixTrie[] endingTries,
       LowerCaseFormCue lowerCaseForms) {
-    this(theta, maxSuffixLength, openTags, logPrior, logPriorCapitalised, baseDistribution, trieOfShape, tries,
+    this(theta, maxEndingLength, openTags, logPrior, logPriorCapitalised, baseDistribution, trieOfShape, endingTries,
         lowerCaseForms, 0, null);
   }
 
   /**
-   * A model that also weighs an unknown word by its beginning, where {@code maxPrefixLength} is
-   * positive: {@code prefixTries} holds two tries of word beginnings (see {@link
-   * #prefixTries()}); the other parameters as above.
+   * A model that also weighs an unknown word by its beginning, where {@code maxBeginningLength} is
+   * positive: {@code beginningTries} holds two tries of word beginnings (see {@link
+   * #beginningTries()}); the other parameters as above.
    */
   public UnknownWordModel(
       double theta,
-      int maxSuffixLength,
+      int maxEndingLength,
       int[] openTags,
       double[] logPrior,
       double[] logPriorCapitalised,
       double[] baseDistribution,
       int[] trieOfShape,
-      SuffixTrie[] tries,
+      AffixTrie[] endingTries,
       LowerCaseFormCue lowerCaseForms,
-      int maxPrefixLength,
-      SuffixTrie[] prefixTries) {
-    if (maxPrefixLength < 0 || (maxPrefixLength > 0 && (prefixTries == null || prefixTries.length != 2))) {
+      int maxBeginningLength,
+      AffixTrie[] beginningTries) {
+    if (maxBeginningLength < 0 || (maxBeginningLength > 0 && (beginningTries == null || beginningTries.length != 2))) {
       throw new IllegalArgumentException("a model of word beginnings needs two tries and a positive length: "
-          + maxPrefixLength);
+          + maxBeginningLength);
     }
     if (logPriorCapitalised.length != logPrior.length) {
       throw new IllegalArgumentException("one prior per tag expected for capitalised words as for the others");
@@ -158,7 +158,7 @@ public final class UnknownWordModel {
       throw new IllegalArgumentException("one trie index per word shape expected");
     }
     for (int t : trieOfShape) {
-      if (t < 0 || t >= tries.length) {
+      if (t < 0 || t >= endingTries.length) {
         throw new IllegalArgumentException("trie index out of range: " + t);
       }
     }
@@ -172,27 +172,27 @@ public final class UnknownWordModel {
       }
     }
     this.theta = theta;
-    this.maxSuffixLength = maxSuffixLength;
+    this.maxEndingLength = maxEndingLength;
     this.openTags = openTags.clone();
     this.logPrior = logPrior.clone();
     this.logPriorCapitalised = logPriorCapitalised.clone();
     this.baseDistribution = baseDistribution.clone();
     this.trieOfShape = trieOfShape.clone();
     this.lowerCaseForms = lowerCaseForms;
-    this.maxPrefixLength = maxPrefixLength;
-    this.prefixTries = maxPrefixLength > 0 ? prefixTries.clone() : null;
+    this.maxBeginningLength = maxBeginningLength;
+    this.beginningTries = maxBeginningLength > 0 ? beginningTries.clone() : null;
     int[] openOfTag = openIndexOfTags(this.openTags, logPrior.length);
-    this.openOfPrefixCount = maxPrefixLength > 0 ? new int[2][] : null;
-    for (int t = 0; maxPrefixLength > 0 && t < 2; t++) {
-      openOfPrefixCount[t] = openIndexes(prefixTries[t], openOfTag);
+    this.openOfBeginningCount = maxBeginningLength > 0 ? new int[2][] : null;
+    for (int t = 0; maxBeginningLength > 0 && t < 2; t++) {
+      openOfBeginningCount[t] = openIndexes(beginningTries[t], openOfTag);
     }
-    this.tries = tries.clone();
-    this.openOfCount = new int[tries.length][];
-    for (int t = 0; t < tries.length; t++) {
-      openOfCount[t] = openIndexes(tries[t], openOfTag);
+    this.endingTries = endingTries.clone();
+    this.openOfCount = new int[endingTries.length][];
+    for (int t = 0; t < endingTries.length; t++) {
+      openOfCount[t] = openIndexes(endingTries[t], openOfTag);
     }
-    this.endingDistribution = perNode(this.tries);
-    this.beginningFactors = maxPrefixLength > 0 ? perNode(this.prefixTries) : null;
+    this.endingDistribution = perNode(this.endingTries);
+    this.beginningFactors = maxBeginningLength > 0 ? perNode(this.beginningTries) : null;
   }
 
   /** Per tag of the tag set, its index among the open tags, or -1. */
@@ -206,7 +206,7 @@ public final class UnknownWordModel {
   }
 
   /** Per count entry of {@code trie}: the open index of its tag, or -1 for a closed tag (or one outside the tag set). */
-  private static int[] openIndexes(SuffixTrie trie, int[] openOfTag) {
+  private static int[] openIndexes(AffixTrie trie, int[] openOfTag) {
     int[] open = new int[trie.countTag.length];
     for (int i = 0; i < open.length; i++) {
       int tag = trie.countTag[i];
@@ -215,7 +215,7 @@ public final class UnknownWordModel {
     return open;
   }
 
-  private static double[][][] perNode(SuffixTrie[] tries) {
+  private static double[][][] perNode(AffixTrie[] tries) {
     double[][][] kept = new double[tries.length][][];
     for (int t = 0; t < tries.length; t++) {
       kept[t] = new double[tries[t].nodeCount()][];
@@ -263,7 +263,7 @@ public final class UnknownWordModel {
     if (lowerCaseForms != null) {
       lowerCaseForms.addLogFactors(shape, buf, off, len, out);
     }
-    if (prefixTries != null) {
+    if (beginningTries != null) {
       double[] logFactors = logBeginningFactors(shape, buf, off, len);
       for (int k = 0; k < openTags.length; k++) {
         out[k] += logFactors[k];
@@ -284,10 +284,10 @@ public final class UnknownWordModel {
    */
   private int logEndingDistribution(WordShape shape, char[] buf, int off, int len, double[] scratch, double[] out) {
     int t = trieOfShape[shape.ordinal()];
-    SuffixTrie trie = tries[t];
+    AffixTrie trie = endingTries[t];
     int node = 0;
     int depth = 0;
-    for (int next; depth < Math.min(len, maxSuffixLength) && (next = trie.child(node, buf[off + len - 1 - depth])) >= 0; depth++) {
+    for (int next; depth < Math.min(len, maxEndingLength) && (next = trie.child(node, buf[off + len - 1 - depth])) >= 0; depth++) {
       node = next;
     }
     double[] kept = (double[]) NODE.getAcquire(endingDistribution[t], node);
@@ -304,16 +304,16 @@ public final class UnknownWordModel {
   }
 
   /**
-   * The logarithm of {@link #prefixFactor} of every open tag for the word, kept per node of the
+   * The logarithm of {@link #beginningFactor} of every open tag for the word, kept per node of the
    * beginning trie: the factor depends only on the deepest node the word's beginning reaches,
    * since abstraction along the path stops where a node holds no count of an open tag, and so
    * do all nodes below it.
    */
   private double[] logBeginningFactors(WordShape shape, char[] buf, int off, int len) {
     int group = shape.capitalisationOnly() == WordShape.CAPITALISED ? 1 : 0;
-    SuffixTrie trie = prefixTries[group];
+    AffixTrie trie = beginningTries[group];
     int node = 0;
-    for (int depth = 0, next; depth < Math.min(len, maxPrefixLength)
+    for (int depth = 0, next; depth < Math.min(len, maxBeginningLength)
         && (next = trie.child(node, Spelling.lowerCase(buf[off + depth]))) >= 0; depth++) {
       node = next;
     }
@@ -321,7 +321,7 @@ public final class UnknownWordModel {
     if (kept == null) {
       kept = new double[openTags.length];
       for (int k = 0; k < kept.length; k++) {
-        kept[k] = Math.log(prefixFactor(buf, off, len, k));
+        kept[k] = Math.log(beginningFactor(buf, off, len, k));
       }
       NODE.setRelease(beginningFactors[group], node, kept);
     }
@@ -338,14 +338,14 @@ public final class UnknownWordModel {
    */
   public int tagDistribution(char[] buf, int off, int len, double weight, long[] heldOut, double[] scratch, double[] out) {
     int t = trieOfShape[WordShape.classify(buf, off, len).ordinal()];
-    SuffixTrie trie = tries[t];
+    AffixTrie trie = endingTries[t];
     int[] openOf = openOfCount[t];
     // the shape's own distribution, abstracted to the one over all rare words
     System.arraycopy(baseDistribution, 0, out, 0, openTags.length);
     abstractTo(trie, openOf, 0, weight, heldOut, out, scratch);
     int node = 0;
     int depth = 0;
-    while (depth < Math.min(len, maxSuffixLength)) {
+    while (depth < Math.min(len, maxEndingLength)) {
       int next = trie.child(node, buf[off + len - 1 - depth]);
       if (next < 0) {
         break;
@@ -364,10 +364,10 @@ public final class UnknownWordModel {
    * capitalisation, the divisor) to the longest beginning that was counted. One open tag at a
    * time, so that it needs no buffer: the path is short and its nodes hold few counts.
    */
-  double prefixFactor(char[] buf, int off, int len, int k) {
+  double beginningFactor(char[] buf, int off, int len, int k) {
     int group = WordShape.classify(buf, off, len).capitalisationOnly() == WordShape.CAPITALISED ? 1 : 0;
-    SuffixTrie trie = prefixTries[group];
-    int[] openOf = openOfPrefixCount[group];
+    AffixTrie trie = beginningTries[group];
+    int[] openOf = openOfBeginningCount[group];
     double dist = baseDistribution[k];
     double root = Double.NaN;
     int node = 0;
@@ -389,7 +389,7 @@ public final class UnknownWordModel {
         root = (own + 1.0) / (counted + 1.0 * openTags.length);
       }
       dist = (own / counted + theta * dist) / (1 + theta);
-      if (depth == Math.min(len, maxPrefixLength)) {
+      if (depth == Math.min(len, maxBeginningLength)) {
         break;
       }
       node = trie.child(node, Spelling.lowerCase(buf[off + depth]));
@@ -401,7 +401,7 @@ public final class UnknownWordModel {
   }
 
   /** dist := (P^(t | node) + θ dist) / (1 + θ), over open tags. */
-  private void abstractTo(SuffixTrie trie, int[] openOf, int node, double weight, long[] heldOut, double[] dist,
+  private void abstractTo(AffixTrie trie, int[] openOf, int node, double weight, long[] heldOut, double[] dist,
       double[] scratch) {
     int k = openTags.length;
     Arrays.fill(scratch, 0, k, 0.0);
@@ -431,8 +431,8 @@ public final class UnknownWordModel {
     return theta;
   }
 
-  public int maxSuffixLength() {
-    return maxSuffixLength;
+  public int maxEndingLength() {
+    return maxEndingLength;
   }
 
   int[] openTags() {
@@ -475,13 +475,13 @@ public final class UnknownWordModel {
     return trieOfShape;
   }
 
-  SuffixTrie[] tries() {
-    return tries;
+  AffixTrie[] endingTries() {
+    return endingTries;
   }
 
   /** Longest word beginning consulted; 0 if the model does not look at beginnings. */
-  public int maxPrefixLength() {
-    return maxPrefixLength;
+  public int maxBeginningLength() {
+    return maxBeginningLength;
   }
 
   /**
@@ -490,8 +490,8 @@ public final class UnknownWordModel {
    * WordShape#ALL_CAPS}), tries of the rare training words lower-cased and reversed, so that a
    * trie's path from the root spells a beginning.
    */
-  public SuffixTrie[] prefixTries() {
-    return prefixTries == null ? null : prefixTries.clone();
+  public AffixTrie[] beginningTries() {
+    return beginningTries == null ? null : beginningTries.clone();
   }
 
   /** The cue of the lower-case forms of capitalised words, or null if the model has none. */
@@ -500,21 +500,21 @@ public final class UnknownWordModel {
   }
 
   /** The ending counts words of {@code shape} are scored with; shapes may share one. */
-  public SuffixTrie suffixTrie(WordShape shape) {
-    return tries[trieOfShape[shape.ordinal()]];
+  public AffixTrie endingTrie(WordShape shape) {
+    return endingTries[trieOfShape[shape.ordinal()]];
   }
 
   /** Approximate heap size in bytes. */
   public long ramBytesUsed() {
     long bytes = 16L * (openTags.length + 2L * logPrior.length);
-    for (SuffixTrie t : tries) {
+    for (AffixTrie t : endingTries) {
       bytes += 14L * t.nodeCount() + 10L * t.countTag.length;
     }
     if (lowerCaseForms != null) {
       bytes += lowerCaseForms.ramBytesUsed();
     }
-    if (prefixTries != null) {
-      for (SuffixTrie t : prefixTries) {
+    if (beginningTries != null) {
+      for (AffixTrie t : beginningTries) {
         bytes += 14L * t.nodeCount() + 10L * t.countTag.length;
       }
     }

@@ -196,8 +196,8 @@ class BundledModelDecodingTest {
   /** The lexicon holds states; each stands for one tag. */
   private static Set<Integer> lexiconTags(int word) {
     Lexicon lexicon = MODEL.lexicon();
-    return IntStream.range(0, lexicon.tagCount(word))
-        .mapToObj(k -> MODEL.states().tagOf(lexicon.tag(word, k))).collect(Collectors.toSet());
+    return IntStream.range(0, lexicon.stateCount(word))
+        .mapToObj(k -> MODEL.states().tagOf(lexicon.state(word, k))).collect(Collectors.toSet());
   }
 
   /** An unknown capitalised first word is looked up in lower case when the model asks for it. */

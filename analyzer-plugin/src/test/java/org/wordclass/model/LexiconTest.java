@@ -56,8 +56,8 @@ class LexiconTest {
   @Test
   void tagsAndEmissionsAreKeptPerWord() {
     int run = SMALL.lookup("run");
-    assertEquals(2, SMALL.tagCount(run));
-    assertEquals(2, SMALL.tag(run, 1));
+    assertEquals(2, SMALL.stateCount(run));
+    assertEquals(2, SMALL.state(run, 1));
     assertEquals(-2.5f, SMALL.logEmission(run, 1));
     assertEquals(5, SMALL.pairCount());
     assertEquals("Zürich", SMALL.word(SMALL.lookup("Zürich")));
@@ -130,7 +130,7 @@ class LexiconTest {
   void entriesComeBackInIdOrder() {
     List<Lexicon.Entry> back = SMALL.entries();
     assertEquals(List.of("run", "the", "Zürich", "a"), back.stream().map(Lexicon.Entry::word).toList());
-    assertArrayEquals(new int[] {1, 2}, back.get(0).tags());
+    assertArrayEquals(new int[] {1, 2}, back.get(0).states());
     assertArrayEquals(new float[] {-1.5f, -2.5f}, back.get(0).logEmissions());
   }
 }

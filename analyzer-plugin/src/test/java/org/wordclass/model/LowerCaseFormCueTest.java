@@ -64,13 +64,13 @@ class LowerCaseFormCueTest {
 
   @Test
   void theFactorsReachTheEmissions() {
-    SuffixTrie.Builder trie = new SuffixTrie.Builder();
+    AffixTrie.Builder trie = new AffixTrie.Builder();
     trie.add("Walker", 1, 3, 4);
     trie.add("Baker", 2, 1, 4);
     double[] logPrior = {Math.log(0.2), Math.log(0.5), Math.log(0.3)};
     int[] open = {1, 2};
     int[] shapes = new int[WordShape.values().length];
-    SuffixTrie[] tries = {trie.build()};
+    AffixTrie[] tries = {trie.build()};
     UnknownWordModel plain = new UnknownWordModel(1.0, 4, open, logPrior, logPrior, new double[] {0.5, 0.5}, shapes, tries);
     UnknownWordModel weighed = new UnknownWordModel(1.0, 4, open, logPrior, logPrior, new double[] {0.5, 0.5}, shapes,
         tries, cue());

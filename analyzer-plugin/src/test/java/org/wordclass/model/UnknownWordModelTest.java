@@ -47,8 +47,8 @@ class UnknownWordModelTest {
     if (model.lowerCaseForms() != null) {
       model.lowerCaseForms().apply(chars, 0, chars.length, expected);
     }
-    for (int i = 0; i < k && model.maxPrefixLength() > 0; i++) {
-      expected[i] *= model.prefixFactor(chars, 0, chars.length, i);
+    for (int i = 0; i < k && model.maxBeginningLength() > 0; i++) {
+      expected[i] *= model.beginningFactor(chars, 0, chars.length, i);
     }
     boolean capitalised = !word.isEmpty() && Character.isUpperCase(word.charAt(0));
     double[] actual = new double[k];

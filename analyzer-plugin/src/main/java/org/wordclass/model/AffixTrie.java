@@ -8,16 +8,19 @@ import java.util.Map;
 import java.util.TreeMap;
 
 /**
- * Tag counts of word endings, as a trie read from the last character backwards: the root holds
- * the counts of all words that were added, the child for 'g' those ending in "g", its child for
- * 'n' those ending in "ng", and so on.
+ * Tag counts of word affixes, as a trie read from the last character of each added string
+ * backwards: the root holds the counts of all strings that were added, the child for 'g' those
+ * ending in "g", its child for 'n' those ending in "ng", and so on. The unknown-word model keeps
+ * two kinds: tries of word <em>endings</em>, built from the words as written, and tries of word
+ * <em>beginnings</em>, built from the words lower-cased and reversed, so that a path from the
+ * root spells a beginning read forwards. The trie itself only knows strings read from the end.
  *
  * <p>Stored flat in breadth-first order, so that the children of a node are consecutive and a
  * child is found by a binary search over at most a few dozen characters. The edge with index
  * {@code e} in breadth-first order leads to node {@code e + 1}. Immutable; about 14 bytes per
  * node plus 6 per non-zero count.
  */
-public final class SuffixTrie {
+public final class AffixTrie {
   final int[] childStart;
   final char[] childChar;
   final int[] countStart;
@@ -25,7 +28,7 @@ public final class SuffixTrie {
   final int[] countValue;
   final int[] total;
 
-  SuffixTrie(int[] childStart, char[] childChar, int[] countStart, short[] countTag, int[] countValue) {
+  AffixTrie(int[] childStart, char[] childChar, int[] countStart, short[] countTag, int[] countValue) {
     this.childStart = childStart;
     this.childChar = childChar;
     this.countStart = countStart;
@@ -66,7 +69,10 @@ public final class SuffixTrie {
 
     private final Node root = new Node();
 
-    /** Counts {@code count} occurrences of {@code word} with {@code tag}, for endings up to {@code maxLength}. */
+    /**
+     * Counts {@code count} occurrences of {@code word} with {@code tag}, for its last {@code
+     * maxLength} characters at most (the word's ending; its beginning if {@code word} is reversed).
+     */
     public void add(String word, int tag, int count, int maxLength) {
       Node node = root;
       node.counts.merge(tag, count, Integer::sum);
@@ -76,7 +82,7 @@ public final class SuffixTrie {
       }
     }
 
-    public SuffixTrie build() {
+    public AffixTrie build() {
       List<Node> order = new ArrayList<>();
       ArrayDeque<Node> queue = new ArrayDeque<>();
       queue.add(root);
@@ -111,7 +117,7 @@ public final class SuffixTrie {
         countTag[i] = (short) counts.get(i)[0];
         countValue[i] = counts.get(i)[1];
       }
-      return new SuffixTrie(childStart, childChar, countStart, countTag, countValue);
+      return new AffixTrie(childStart, childChar, countStart, countTag, countValue);
     }
   }
 }
