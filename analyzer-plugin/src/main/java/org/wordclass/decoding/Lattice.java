@@ -27,7 +27,6 @@ public final class Lattice {
   private final double[] unknownScores;
   /** {@link #unknownPlan} for lower-case (0) and capitalised (1) unknown words. */
   private final int[][] unknownPlan;
-  private char[] lowerCased = new char[32];
   private int size;
   private int[] candidateStart = new int[65];
   private int[] candidateState = new int[256];
@@ -130,11 +129,7 @@ public final class Lattice {
     int word = lexicon.lookup(buf, off, len);
     foundLowerCased = false;
     if (word < 0 && size == 0 && model.cues().lowercaseFirstWord() && Spelling.startsWithCapital(buf, off, len)) {
-      if (lowerCased.length < len) {
-        lowerCased = new char[Math.max(len, 2 * lowerCased.length)];
-      }
-      Spelling.lowerCase(buf, off, len, lowerCased);
-      word = lexicon.lookup(lowerCased, 0, len);
+      word = lexicon.lookupLowerCased(buf, off, len);
       foundLowerCased = word >= 0;
     }
     return word;

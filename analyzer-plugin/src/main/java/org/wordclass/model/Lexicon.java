@@ -285,7 +285,20 @@ public final class Lexicon {
     for (int i = off, end = off + len; i < end; i++) {
       h = 31 * h + buf[i];
     }
-    // finalisation step of MurmurHash3, so that similar words spread over the table
+    return spread(h);
+  }
+
+  /** {@link #hash} of the lower-case form of {@code buf[off..off+len)}, lower-cased on the fly. */
+  private static int hashLowerCased(char[] buf, int off, int len) {
+    int h = 0;
+    for (int i = off, end = off + len; i < end; i++) {
+      h = 31 * h + Spelling.lowerCase(buf[i]);
+    }
+    return spread(h);
+  }
+
+  /** The finalisation step of MurmurHash3, so that similar words spread over the table. */
+  private static int spread(int h) {
     h ^= h >>> 16;
     h *= 0x85ebca6b;
     h ^= h >>> 13;
@@ -331,22 +344,48 @@ public final class Lexicon {
     return lookup(word.toCharArray(), 0, word.length());
   }
 
+  /**
+   * Id of the lower-case form ({@link Spelling#lowerCase(char)}) of {@code buf[off..off+len)},
+   * or -1 if that form is not in the lexicon: the same table as {@link #lookup}, hashed and
+   * compared lower-casing the token on the fly, so that it allocates and copies nothing. What a
+   * capitalised first word and the cue of lower-case forms look words up by.
+   */
+  public int lookupLowerCased(char[] buf, int off, int len) {
+    int mask = slots.length - 1;
+    int h = hashLowerCased(buf, off, len);
+    int slot = h & mask;
+    long entry;
+    while ((entry = slots[slot]) != 0) {
+      if ((int) (entry >>> 32) == h && equalsLowerCased((int) entry - 1, buf, off, len)) {
+        return (int) entry - 1;
+      }
+      slot = (slot + 1) & mask;
+    }
+    return -1;
+  }
+
+  private boolean equalsLowerCased(int word, char[] buf, int off, int len) {
+    int start = wordStart[word];
+    if (wordStart[word + 1] - start != len) {
+      return false;
+    }
+    for (int i = 0; i < len; i++) {
+      if (chars[start + i] != Spelling.lowerCase(buf[off + i])) {
+        return false;
+      }
+    }
+    return true;
+  }
+
+  /** Whether word {@code word} is written in lower case (and not empty). */
+  public boolean isLowerCase(int word) {
+    int start = wordStart[word];
+    int len = wordStart[word + 1] - start;
+    return len > 0 && Spelling.isLowerCase(chars, start, len);
+  }
+
   public int size() {
     return wordStart.length - 1;
-  }
-
-  /**
-   * The characters of all words, word w from {@code wordStarts()[w]} to {@code wordStarts()[w +
-   * 1]}: for the classes of this package that index the words without copying them. Not to be
-   * modified.
-   */
-  char[] allChars() {
-    return chars;
-  }
-
-  /** Where each word starts in {@link #allChars}, and one more entry for the end. Not to be modified. */
-  int[] wordStarts() {
-    return wordStart;
   }
 
   public String word(int word) {

@@ -53,13 +53,6 @@ public final class Spelling {
     return new String(out);
   }
 
-  /** Writes the lower-case form of {@code buf[off..off+len)} into {@code out[0..len)}. */
-  public static void lowerCase(char[] buf, int off, int len, char[] out) {
-    for (int i = 0; i < len; i++) {
-      out[i] = lowerCase(buf[off + i]);
-    }
-  }
-
   /** Whether lower-casing leaves {@code buf[off..off+len)} as it is. */
   public static boolean isLowerCase(char[] buf, int off, int len) {
     for (int i = off, end = off + len; i < end; i++) {

@@ -2,6 +2,7 @@ package org.wordclass.model;
 
 import static org.junit.jupiter.api.Assertions.assertArrayEquals;
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
@@ -51,6 +52,17 @@ class LexiconTest {
     assertEquals(0, empty.size());
     assertEquals(-1, empty.lookup("run"));
     assertEquals(-1, empty.lookup(""));
+  }
+
+  @Test
+  void theSameTableFindsTheLowerCaseFormOfAToken() {
+    char[] buf = "xxRUN THE ZÜRICH".toCharArray();
+    assertEquals(SMALL.lookup("run"), SMALL.lookupLowerCased(buf, 2, 3));
+    assertEquals(SMALL.lookup("the"), SMALL.lookupLowerCased(buf, 6, 3));
+    // the lower-case form of ZÜRICH is zürich, which the lexicon does not hold: Zürich is not it
+    assertEquals(-1, SMALL.lookupLowerCased(buf, 10, 6));
+    assertTrue(SMALL.isLowerCase(SMALL.lookup("run")));
+    assertFalse(SMALL.isLowerCase(SMALL.lookup("Zürich")));
   }
 
   @Test
