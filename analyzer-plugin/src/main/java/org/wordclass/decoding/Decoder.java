@@ -11,9 +11,9 @@ import org.wordclass.model.HmmModel;
  * <p>Cost per token with K candidates per token: Viterbi O(K^2) at order 1 and O(K^3) at order
  * 2; forward-backward about twice that. Memory is O(n K^2) for n tokens, in buffers that are
  * kept and reused, so steady-state decoding allocates nothing. Forward-backward runs in linear
- * space with one scale factor per token, so long sequences do not underflow. After it, {@link
- * #addExpectedTransitions} gives the expected transition counts that Baum-Welch re-estimation
- * needs, at the cost of one more forward-like pass.
+ * space with one scale factor per token, so long sequences do not underflow. What it leaves is
+ * readable ({@link #scaledForward} and the methods beside it), so that training code computes
+ * its expectations outside the search engine's jar.
  *
  * <p>Not thread-safe: one per thread; the model it reads is shared.
  */
@@ -344,28 +344,44 @@ public final class Decoder {
   }
 
   /**
-   * After {@link #forwardBackward} at order 1: the forward weight of the {@code k}-th candidate
-   * of {@code position} (the probability of the tokens up to and including it, ending in that
-   * candidate) and, below, its backward weight (of the tokens after it, given that candidate).
-   * Each is scaled by a factor shared by all candidates of the position, so their product is
-   * proportional to the posterior. Split-merge training reads them to estimate what merging two
-   * states would cost without decoding again.
+   * After {@link #forwardBackward}, the read-only view of what it computed that training code
+   * (Baum-Welch and latent sub-states, in the model builder) takes its expectations from: the
+   * forward weight of cell {@code cell} of {@code position} (the probability of the tokens up to
+   * and including it, ending in that cell). A position's cells are its candidates at order 1,
+   * and its (previous candidate j, candidate k) pairs at order 2, cell {@code j * K + k} for K
+   * candidates. Each weight is scaled by a factor shared by all cells of the position, so forward
+   * times backward is proportional to the posterior.
    */
-  public double scaledForward(int position, int k) {
-    requireFirstOrder();
-    return alpha[stateStart[position] + k];
+  public double scaledForward(int position, int cell) {
+    return alpha[stateStart[position] + cell];
   }
 
-  /** The backward weight of a candidate; see {@link #scaledForward}. */
-  public double scaledBackward(int position, int k) {
-    requireFirstOrder();
-    return beta[stateStart[position] + k];
+  /** The backward weight of a cell (of the tokens after it, given the cell); see {@link #scaledForward}. */
+  public double scaledBackward(int position, int cell) {
+    return beta[stateStart[position] + cell];
   }
 
-  private void requireFirstOrder() {
-    if (order != 1) {
-      throw new IllegalStateException("forward and backward weights per candidate exist at order 1 only");
-    }
+  /**
+   * The sum of the backward weights of {@code position} before they were scaled to sum to 1,
+   * for every position but the last: the unscaled backward weight of a cell is this times
+   * {@link #scaledBackward}.
+   */
+  public double backwardSum(int position) {
+    return betaSum[position];
+  }
+
+  /**
+   * {@code exp} of the emission of candidate {@code k} of {@code position} after candidate
+   * {@code j} of the position before, minus the largest emission of the position, as
+   * forward-backward multiplies it.
+   */
+  public double scaledEmission(int position, int j, int k) {
+    return scaledEmission[lattice.pairOffset(position) + j * lattice.pairStride(position) + k];
+  }
+
+  /** The log-likelihood the last {@link #forwardBackward} returned (negative infinity before any). */
+  public double lastLogLikelihood() {
+    return lastLogLikelihood;
   }
 
   /**
@@ -394,111 +410,6 @@ public final class Decoder {
     for (int c = 0; c < lattice.candidateCount(position); c++) {
       out[lattice.candidateTag(position, c)] += posterior(position, c);
     }
-  }
-
-  /**
-   * Adds to {@code counts} the expected number of times each transition is taken in the sequence
-   * of the last {@link #forwardBackward} call, given the whole sequence: the expectation step of
-   * Baum-Welch (forward-backward) re-estimation. At order 1 these are the pair posteriors
-   * ξ(j, k) summed over positions, indexed like {@link HmmModel#bigramIndex}; at order 2 the
-   * expected trigram counts over (h, j, k), indexed like {@link HmmModel#trigramIndex}. The
-   * transitions from and to the sentence boundary are included, so a sequence of n tokens adds
-   * n + 1 in total. The expected emission counts are the candidate posteriors, {@link #posterior}.
-   *
-   * <p>Cost: one more pass like the forward pass, O(n K^2) at order 1 and O(n K^3) at order 2. It
-   * reuses the scaled forward and backward values that forwardBackward kept, with the per-position
-   * normaliser of the backward pass, and allocates nothing. An empty sequence, or one the model
-   * gives probability zero, adds nothing. The lattice must not change in between.
-   *
-   * @param counts {@code (T+1)^2} entries at order 1, {@code (T+1)^3} at order 2
-   */
-  public void addExpectedTransitions(double[] counts) {
-    int expected = order == 2 ? states * states * states : states * states;
-    if (counts.length != expected) {
-      throw new IllegalArgumentException("expected " + expected + " transition counts, got " + counts.length);
-    }
-    int n = lattice.size();
-    if (n == 0 || lastLogLikelihood == Double.NEGATIVE_INFINITY) {
-      return;
-    }
-    if (order == 2) {
-      addExpectedTrigrams(counts, n);
-    } else {
-      addExpectedBigrams(counts, n);
-    }
-  }
-
-  private void addExpectedBigrams(double[] counts, int n) {
-    for (int k = 0; k < count(0); k++) {
-      counts[boundary * states + stateAt(0, k)] += posterior(0, k);
-    }
-    for (int i = 0; i + 1 < n; i++) {
-      int here = stateStart[i];
-      int next = stateStart[i + 1];
-      int emit = lattice.pairOffset(i + 1);
-      int stride = lattice.pairStride(i + 1);
-      int kk = count(i + 1);
-      // the unnormalised backward value at i is betaSum[i] * beta, so this makes the ξ of i sum to 1
-      double norm = 1.0 / (betaSum[i] * overlap(here, count(i)));
-      for (int j = 0; j < count(i); j++) {
-        double a = alpha[here + j] * norm;
-        int row = stateAt(i, j) * states;
-        for (int k = 0; k < kk; k++) {
-          int index = row + stateAt(i + 1, k);
-          counts[index] += a * bigram[index] * scaledEmission[emit + j * stride + k] * beta[next + k];
-        }
-      }
-    }
-    for (int k = 0; k < count(n - 1); k++) {
-      counts[stateAt(n - 1, k) * states + boundary] += posterior(n - 1, k);
-    }
-  }
-
-  private void addExpectedTrigrams(double[] counts, int n) {
-    for (int k = 0; k < count(0); k++) {
-      counts[(boundary * states + boundary) * states + stateAt(0, k)] += posterior(0, k);
-    }
-    for (int i = 0; i + 1 < n; i++) {
-      int kh = count(i - 1);
-      int kj = count(i);
-      int kk = count(i + 1);
-      int here = stateStart[i];
-      int next = stateStart[i + 1];
-      int emit = lattice.pairOffset(i + 1);
-      int stride = lattice.pairStride(i + 1);
-      double norm = 1.0 / (betaSum[i] * overlap(here, kh * kj));
-      for (int h = 0; h < kh; h++) {
-        int th = stateAt(i - 1, h);
-        for (int j = 0; j < kj; j++) {
-          double a = alpha[here + h * kj + j] * norm;
-          int base = (th * states + stateAt(i, j)) * states;
-          for (int k = 0; k < kk; k++) {
-            int index = base + stateAt(i + 1, k);
-            counts[index] += a * trigram[index] * scaledEmission[emit + j * stride + k] * beta[next + j * kk + k];
-          }
-        }
-      }
-    }
-    int kj = count(n - 2);
-    int kk = count(n - 1);
-    int last = stateStart[n - 1];
-    double norm = 1.0 / overlap(last, kj * kk);
-    for (int j = 0; j < kj; j++) {
-      int base = (stateAt(n - 2, j) * states) * states;
-      for (int k = 0; k < kk; k++) {
-        int state = last + j * kk + k;
-        counts[base + stateAt(n - 1, k) * states + boundary] += alpha[state] * beta[state] * norm;
-      }
-    }
-  }
-
-  /** Sum of alpha * beta over {@code count} states: the normaliser of their scaled posteriors. */
-  private double overlap(int from, int count) {
-    double sum = 0;
-    for (int x = from; x < from + count; x++) {
-      sum += alpha[x] * beta[x];
-    }
-    return sum;
   }
 
   /** Stores exp(emission - max emission of the token), and the sum of the maxima for the likelihood. */

@@ -293,7 +293,7 @@ public final class UnknownWordModel {
     double[] kept = (double[]) NODE.getAcquire(endingDistribution[t], node);
     if (kept == null) {
       kept = new double[openTags.length];
-      tagDistribution(buf, off, len, theta, null, scratch, kept);
+      tagDistribution(buf, off, len, theta, scratch, kept);
       for (int k = 0; k < kept.length; k++) {
         kept[k] = Math.log(kept[k]);
       }
@@ -330,19 +330,19 @@ public final class UnknownWordModel {
 
   /**
    * Writes {@code P(openTag(k) | ending, shape)} into {@code out[k]}, by successive abstraction
-   * with weight {@code weight}. With {@code heldOut} (counts per open tag) those counts are taken
-   * out of every ending on the word's path first, which scores a training word as if it had
-   * not been seen: the leave-one-out estimate used to choose θ.
+   * with weight {@code weight}: from the distribution over all rare words, through the root of
+   * the shape's trie (all rare words of the shape), to the longest ending that was counted.
    *
    * @return length of the longest ending that was found in the counts
    */
-  public int tagDistribution(char[] buf, int off, int len, double weight, long[] heldOut, double[] scratch, double[] out) {
+  public int tagDistribution(char[] buf, int off, int len, double weight, double[] scratch, double[] out) {
     int t = trieOfShape[WordShape.classify(buf, off, len).ordinal()];
     AffixTrie trie = endingTries[t];
     int[] openOf = openOfCount[t];
     // the shape's own distribution, abstracted to the one over all rare words
     System.arraycopy(baseDistribution, 0, out, 0, openTags.length);
-    abstractTo(trie, openOf, 0, weight, heldOut, out, scratch);
+    openCounts(trie, openOf, 0, scratch);
+    abstractTo(scratch, openTags.length, weight, out);
     int node = 0;
     int depth = 0;
     while (depth < Math.min(len, maxEndingLength)) {
@@ -352,9 +352,67 @@ public final class UnknownWordModel {
       }
       node = next;
       depth++;
-      abstractTo(trie, openOf, node, weight, heldOut, out, scratch);
+      openCounts(trie, openOf, node, scratch);
+      abstractTo(scratch, openTags.length, weight, out);
     }
     return depth;
+  }
+
+  /**
+   * The nodes of the word's ending trie that {@link #tagDistribution} abstracts through, root
+   * first, into {@code nodes} (at least {@link #maxEndingLength()} + 1 long): a read-only view for
+   * training code that scores a word with some counts taken out (leave-one-out).
+   *
+   * @return the number of nodes written, the length of the longest counted ending plus one
+   */
+  public int endingPath(char[] buf, int off, int len, int[] nodes) {
+    AffixTrie trie = endingTries[trieOfShape[WordShape.classify(buf, off, len).ordinal()]];
+    int count = 0;
+    nodes[count++] = 0;
+    for (int node = 0, next; count - 1 < Math.min(len, maxEndingLength)
+        && (next = trie.child(node, buf[off + len - count])) >= 0; node = next) {
+      nodes[count++] = next;
+    }
+    return count;
+  }
+
+  /** Writes the counts of each open tag at {@code node} of the word's ending trie into {@code out}. */
+  public void openCountsAt(char[] buf, int off, int len, int node, double[] out) {
+    int t = trieOfShape[WordShape.classify(buf, off, len).ordinal()];
+    openCounts(endingTries[t], openOfCount[t], node, out);
+  }
+
+  /** The share of open tag {@code k} among all rare training words, where abstraction starts. */
+  public double baseProbability(int k) {
+    return baseDistribution[k];
+  }
+
+  private void openCounts(AffixTrie trie, int[] openOf, int node, double[] out) {
+    Arrays.fill(out, 0, openTags.length, 0.0);
+    for (int i = trie.countStart[node], end = trie.countStart[node + 1]; i < end; i++) {
+      int open = openOf[i];
+      if (open >= 0) {
+        out[open] = trie.countValue[i];
+      }
+    }
+  }
+
+  /**
+   * One step of successive abstraction over the first {@code n} entries: {@code dist := (counts /
+   * Σ counts + weight dist) / (1 + weight)}; nothing where the counts are all zero.
+   */
+  public static void abstractTo(double[] counts, int n, double weight, double[] dist) {
+    double counted = 0;
+    for (int i = 0; i < n; i++) {
+      counted += counts[i];
+    }
+    if (counted == 0) {
+      return;
+    }
+    double norm = 1.0 / (1.0 + weight);
+    for (int i = 0; i < n; i++) {
+      dist[i] = (counts[i] / counted + weight * dist[i]) * norm;
+    }
   }
 
   /**
@@ -398,33 +456,6 @@ public final class UnknownWordModel {
       }
     }
     return Double.isNaN(root) ? 1 : dist / root;
-  }
-
-  /** dist := (P^(t | node) + θ dist) / (1 + θ), over open tags. */
-  private void abstractTo(AffixTrie trie, int[] openOf, int node, double weight, long[] heldOut, double[] dist,
-      double[] scratch) {
-    int k = openTags.length;
-    Arrays.fill(scratch, 0, k, 0.0);
-    for (int i = trie.countStart[node], end = trie.countStart[node + 1]; i < end; i++) {
-      int open = openOf[i];
-      if (open >= 0) {
-        scratch[open] = trie.countValue[i];
-      }
-    }
-    double counted = 0;
-    for (int i = 0; i < k; i++) {
-      if (heldOut != null) {
-        scratch[i] = Math.max(0, scratch[i] - heldOut[i]);
-      }
-      counted += scratch[i];
-    }
-    if (counted == 0) {
-      return;
-    }
-    double norm = 1.0 / (1.0 + weight);
-    for (int i = 0; i < k; i++) {
-      dist[i] = (scratch[i] / counted + weight * dist[i]) * norm;
-    }
   }
 
   public double theta() {

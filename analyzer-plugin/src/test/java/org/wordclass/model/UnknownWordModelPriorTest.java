@@ -39,7 +39,7 @@ class UnknownWordModelPriorTest {
 
   private static double[] distribution(UnknownWordModel m, String word) {
     double[] out = new double[m.openTagCount()];
-    m.tagDistribution(word.toCharArray(), 0, word.length(), m.theta(), null, new double[m.openTagCount()], out);
+    m.tagDistribution(word.toCharArray(), 0, word.length(), m.theta(), new double[m.openTagCount()], out);
     return out;
   }
 

@@ -43,7 +43,7 @@ class UnknownWordModelTest {
     int k = model.openTagCount();
     char[] chars = word.toCharArray();
     double[] expected = new double[k];
-    int expectedDepth = model.tagDistribution(chars, 0, chars.length, model.theta(), null, new double[k], expected);
+    int expectedDepth = model.tagDistribution(chars, 0, chars.length, model.theta(), new double[k], expected);
     if (model.lowerCaseForms() != null) {
       model.lowerCaseForms().apply(chars, 0, chars.length, expected);
     }
