@@ -15,6 +15,10 @@ import org.wordclass.model.HmmModel;
  * readable ({@link #scaledForward} and the methods beside it), so that training code computes
  * its expectations outside the search engine's jar.
  *
+ * <p>Where each cell of the trellis lies is {@link Trellis}'s to say: the kernels ask it for a
+ * position's first cell and strides ({@code start + j * stride + k}, the same form for cells and
+ * emissions) rather than working the layout out themselves.
+ *
  * <p>Not thread-safe: one per thread; the model it reads is shared.
  */
 public final class Decoder {
@@ -30,9 +34,8 @@ public final class Decoder {
   private final float[] logTrigram;
   private final double[] bigram;
   private final double[] trigram;
-  private final int[] boundaryState;
+  private final Trellis trellis;
 
-  private int[] stateStart = new int[65];
   private double[] score = new double[1024];
   private int[] backPointer = new int[1024];
   private double[] alpha = new double[1024];
@@ -68,7 +71,7 @@ public final class Decoder {
     this.logTrigram = model.logTrigramFloats();
     this.bigram = model.bigramTable();
     this.trigram = model.trigramTable();
-    this.boundaryState = new int[] {boundary};
+    this.trellis = new Trellis(lattice, order, boundary);
   }
 
   public HmmModel model() {
@@ -84,41 +87,10 @@ public final class Decoder {
     return lattice;
   }
 
-  /** Candidates of a position, with the virtual boundary positions -1 and -2 holding one. */
-  private int count(int position) {
-    return position < 0 ? 1 : lattice.candidateCount(position);
-  }
-
-  /**
-   * The array holding the candidate states of {@code position} from {@link #statesFrom}: the
-   * lattice's, or the boundary alone for the virtual positions before the sequence. Inner loops
-   * index it directly instead of testing the position per candidate.
-   */
-  private int[] statesAt(int position) {
-    return position < 0 ? boundaryState : lattice.candidateStates();
-  }
-
-  private int statesFrom(int position) {
-    return position < 0 ? 0 : lattice.candidateOffset(position);
-  }
-
-  /** The state of candidate {@code k}, or the boundary before the sequence. */
-  private int stateAt(int position, int k) {
-    return position < 0 ? boundary : lattice.candidateState(position, k);
-  }
-
-  /** Lays out one state per (previous candidate, candidate) pair (order 2) or per candidate (order 1). */
+  /** Lays out the trellis ({@link Trellis}) and makes the buffers hold its cells. */
   private int layOutStates() {
     int n = lattice.size();
-    if (stateStart.length < n + 1) {
-      stateStart = new int[Math.max(n + 1, stateStart.length * 2)];
-    }
-    int total = 0;
-    for (int i = 0; i < n; i++) {
-      stateStart[i] = total;
-      total += order == 2 ? count(i - 1) * count(i) : count(i);
-    }
-    stateStart[n] = total;
+    int total = trellis.layOut();
     if (betaSum.length < n) {
       betaSum = new double[Math.max(n, betaSum.length * 2)];
     }
@@ -169,16 +141,16 @@ public final class Decoder {
     double[] emissions = lattice.pairLogEmissions();
     int[] current = lattice.candidateStates();
     for (int i = 0; i < n; i++) {
-      int kp = count(i - 1);
-      int kc = count(i);
-      int here = stateStart[i];
+      int kp = trellis.count(i - 1);
+      int kc = trellis.count(i);
+      int here = trellis.start(i);
       double[] prevScore = i == 0 ? START_SCORE : score;
-      int prev = i == 0 ? 0 : stateStart[i - 1];
-      int[] previous = statesAt(i - 1);
-      int po = statesFrom(i - 1);
+      int prev = trellis.start(i - 1);
+      int[] previous = trellis.statesAt(i - 1);
+      int po = trellis.statesFrom(i - 1);
       int co = lattice.candidateOffset(i);
-      int emit = lattice.pairOffset(i);
-      int stride = lattice.pairStride(i);
+      int emit = trellis.emissionStart(i);
+      int stride = trellis.emissionStride(i);
       for (int k = 0; k < kc; k++) {
         int tk = current[co + k];
         double top = Double.NEGATIVE_INFINITY;
@@ -194,11 +166,11 @@ public final class Decoder {
         backPointer[here + k] = arg;
       }
     }
-    int last = stateStart[n - 1];
+    int last = trellis.start(n - 1);
     double top = Double.NEGATIVE_INFINITY;
     int arg = 0;
-    for (int k = 0; k < count(n - 1); k++) {
-      double s = score[last + k] + logBigram[stateAt(n - 1, k) * states + boundary];
+    for (int k = 0; k < trellis.count(n - 1); k++) {
+      double s = score[last + k] + logBigram[trellis.stateAt(n - 1, k) * states + boundary];
       if (s > top) {
         top = s;
         arg = k;
@@ -207,7 +179,7 @@ public final class Decoder {
     bestLogProbability = top;
     for (int i = n - 1; i >= 0; i--) {
       best[i] = arg;
-      arg = backPointer[stateStart[i] + arg];
+      arg = backPointer[trellis.start(i) + arg];
     }
   }
 
@@ -216,23 +188,25 @@ public final class Decoder {
     int[] current = lattice.candidateStates();
     int plane = states * states;
     for (int i = 0; i < n; i++) {
-      int kpp = count(i - 2);
+      int kpp = trellis.count(i - 2);
       if (planeOf.length < kpp) {
         planeOf = new int[kpp];
         column = new double[kpp];
       }
-      int kp = count(i - 1);
-      int kc = count(i);
-      int here = stateStart[i];
+      int kp = trellis.count(i - 1);
+      int kc = trellis.count(i);
+      int here = trellis.start(i);
       double[] prevScore = i == 0 ? START_SCORE : score;
-      int prev = i == 0 ? 0 : stateStart[i - 1];
-      int[] first = statesAt(i - 2);
-      int fo = statesFrom(i - 2);
-      int[] previous = statesAt(i - 1);
-      int po = statesFrom(i - 1);
+      int prev = trellis.start(i - 1);
+      int prevRow = trellis.stride(i - 1);
+      int row = trellis.stride(i);
+      int[] first = trellis.statesAt(i - 2);
+      int fo = trellis.statesFrom(i - 2);
+      int[] previous = trellis.statesAt(i - 1);
+      int po = trellis.statesFrom(i - 1);
       int co = lattice.candidateOffset(i);
-      int emit = lattice.pairOffset(i);
-      int stride = lattice.pairStride(i);
+      int emit = trellis.emissionStart(i);
+      int stride = trellis.emissionStride(i);
       for (int h = 0; h < kpp; h++) {
         planeOf[h] = first[fo + h] * plane;
       }
@@ -240,9 +214,9 @@ public final class Decoder {
         int tj = previous[po + j];
         // the scores of (h, j) for every h, gathered once for all k
         for (int h = 0; h < kpp; h++) {
-          column[h] = prevScore[prev + h * kp + j];
+          column[h] = prevScore[prev + h * prevRow + j];
         }
-        int cell = here + j * kc;
+        int cell = here + j * row;
         int emitted = emit + j * stride;
         for (int k = 0; k < kc; k++) {
           // (th * states + tj) * states + tk, with the part that does not depend on h taken out
@@ -258,15 +232,16 @@ public final class Decoder {
         }
       }
     }
-    int kp = count(n - 2);
-    int kc = count(n - 1);
-    int last = stateStart[n - 1];
+    int kp = trellis.count(n - 2);
+    int kc = trellis.count(n - 1);
+    int last = trellis.start(n - 1);
+    int lastRow = trellis.stride(n - 1);
     double top = Double.NEGATIVE_INFINITY;
     int argJ = 0;
     int argK = 0;
     for (int j = 0; j < kp; j++) {
       for (int k = 0; k < kc; k++) {
-        double s = score[last + j * kc + k] + logTrigram[(stateAt(n - 2, j) * states + stateAt(n - 1, k)) * states + boundary];
+        double s = score[last + j * lastRow + k] + logTrigram[(trellis.stateAt(n - 2, j) * states + trellis.stateAt(n - 1, k)) * states + boundary];
         if (s > top) {
           top = s;
           argJ = j;
@@ -290,17 +265,17 @@ public final class Decoder {
    * h whose score plus transition equals the best, computed exactly as the forward pass did.
    */
   private int bestBefore(int i, int j, int k) {
-    int kpp = count(i - 2);
+    int kpp = trellis.count(i - 2);
     if (kpp == 1) {
       return 0;
     }
-    int kp = count(i - 1);
-    int prev = stateStart[i - 1];
-    int last = stateAt(i - 1, j) * states + stateAt(i, k);
+    int prev = trellis.start(i - 1);
+    int prevRow = trellis.stride(i - 1);
+    int last = trellis.stateAt(i - 1, j) * states + trellis.stateAt(i, k);
     double top = Double.NEGATIVE_INFINITY;
     int arg = 0;
     for (int h = 0; h < kpp; h++) {
-      double s = score[prev + h * kp + j] + logTrigram[stateAt(i - 2, h) * states * states + last];
+      double s = score[prev + h * prevRow + j] + logTrigram[trellis.stateAt(i - 2, h) * states * states + last];
       if (s > top) {
         top = s;
         arg = h;
@@ -328,10 +303,10 @@ public final class Decoder {
     for (int i = 0; i < n; i++) {
       int base = lattice.candidateOffset(i);
       double sum = 0;
-      for (int k = 0; k < count(i); k++) {
+      for (int k = 0; k < trellis.count(i); k++) {
         sum += posterior[base + k];
       }
-      for (int k = 0; k < count(i); k++) {
+      for (int k = 0; k < trellis.count(i); k++) {
         posterior[base + k] /= sum;
       }
     }
@@ -353,12 +328,12 @@ public final class Decoder {
    * times backward is proportional to the posterior.
    */
   public double scaledForward(int position, int cell) {
-    return alpha[stateStart[position] + cell];
+    return alpha[trellis.start(position) + cell];
   }
 
   /** The backward weight of a cell (of the tokens after it, given the cell); see {@link #scaledForward}. */
   public double scaledBackward(int position, int cell) {
-    return beta[stateStart[position] + cell];
+    return beta[trellis.start(position) + cell];
   }
 
   /**
@@ -376,7 +351,7 @@ public final class Decoder {
    * forward-backward multiplies it.
    */
   public double scaledEmission(int position, int j, int k) {
-    return scaledEmission[lattice.pairOffset(position) + j * lattice.pairStride(position) + k];
+    return scaledEmission[trellis.emissionStart(position) + j * trellis.emissionStride(position) + k];
   }
 
   /** The log-likelihood the last {@link #forwardBackward} returned (negative infinity before any). */
@@ -417,8 +392,8 @@ public final class Decoder {
     maxEmissionSum = 0;
     double[] pairs = lattice.pairLogEmissions();
     for (int i = 0; i < n; i++) {
-      int from = lattice.pairOffset(i);
-      int to = lattice.pairOffset(i + 1);
+      int from = trellis.emissionStart(i);
+      int to = trellis.emissionStart(i + 1);
       double max = Double.NEGATIVE_INFINITY;
       for (int p = from; p < to; p++) {
         max = Math.max(max, pairs[p]);
@@ -433,57 +408,57 @@ public final class Decoder {
   private double forwardBackwardFirstOrder(int n) {
     double logScale = maxEmissionSum;
     for (int i = 0; i < n; i++) {
-      int kp = count(i - 1);
-      int here = stateStart[i];
-      int prev = i == 0 ? 0 : stateStart[i - 1];
-      int emit = lattice.pairOffset(i);
-      int stride = lattice.pairStride(i);
-      int kc = count(i);
+      int kp = trellis.count(i - 1);
+      int here = trellis.start(i);
+      int prev = trellis.start(i - 1);
+      int emit = trellis.emissionStart(i);
+      int stride = trellis.emissionStride(i);
+      int kc = trellis.count(i);
       double sum = 0;
       for (int k = 0; k < kc; k++) {
-        int tk = stateAt(i, k);
+        int tk = trellis.stateAt(i, k);
         double a = 0;
         for (int j = 0; j < kp; j++) {
-          a += (i == 0 ? 1 : alpha[prev + j]) * bigram[stateAt(i - 1, j) * states + tk] * scaledEmission[emit + j * stride + k];
+          a += (i == 0 ? 1 : alpha[prev + j]) * bigram[trellis.stateAt(i - 1, j) * states + tk] * scaledEmission[emit + j * stride + k];
         }
         alpha[here + k] = a;
         sum += a;
       }
-      logScale += normalize(alpha, here, count(i), sum);
+      logScale += normalize(alpha, here, trellis.cells(i), sum);
     }
-    int last = stateStart[n - 1];
+    int last = trellis.start(n - 1);
     double end = 0;
     double sum = 0;
-    for (int k = 0; k < count(n - 1); k++) {
-      double b = bigram[stateAt(n - 1, k) * states + boundary];
+    for (int k = 0; k < trellis.count(n - 1); k++) {
+      double b = bigram[trellis.stateAt(n - 1, k) * states + boundary];
       beta[last + k] = b;
       end += alpha[last + k] * b;
       sum += b;
     }
-    normalize(beta, last, count(n - 1), sum);
+    normalize(beta, last, trellis.cells(n - 1), sum);
     for (int i = n - 2; i >= 0; i--) {
-      int here = stateStart[i];
-      int next = stateStart[i + 1];
-      int emit = lattice.pairOffset(i + 1);
-      int stride = lattice.pairStride(i + 1);
-      int kn = count(i + 1);
+      int here = trellis.start(i);
+      int next = trellis.start(i + 1);
+      int emit = trellis.emissionStart(i + 1);
+      int stride = trellis.emissionStride(i + 1);
+      int kn = trellis.count(i + 1);
       sum = 0;
-      for (int j = 0; j < count(i); j++) {
-        int tj = stateAt(i, j);
+      for (int j = 0; j < trellis.count(i); j++) {
+        int tj = trellis.stateAt(i, j);
         double b = 0;
         for (int k = 0; k < kn; k++) {
-          b += bigram[tj * states + stateAt(i + 1, k)] * scaledEmission[emit + j * stride + k] * beta[next + k];
+          b += bigram[tj * states + trellis.stateAt(i + 1, k)] * scaledEmission[emit + j * stride + k] * beta[next + k];
         }
         beta[here + j] = b;
         sum += b;
       }
       betaSum[i] = sum;
-      normalize(beta, here, count(i), sum);
+      normalize(beta, here, trellis.cells(i), sum);
     }
     for (int i = 0; i < n; i++) {
-      int here = stateStart[i];
+      int here = trellis.start(i);
       int base = lattice.candidateOffset(i);
-      for (int k = 0; k < count(i); k++) {
+      for (int k = 0; k < trellis.count(i); k++) {
         posterior[base + k] = alpha[here + k] * beta[here + k];
       }
     }
@@ -493,77 +468,83 @@ public final class Decoder {
   private double forwardBackwardSecondOrder(int n) {
     double logScale = maxEmissionSum;
     for (int i = 0; i < n; i++) {
-      int kpp = count(i - 2);
-      int kp = count(i - 1);
-      int kc = count(i);
-      int here = stateStart[i];
-      int prev = i == 0 ? 0 : stateStart[i - 1];
-      int emit = lattice.pairOffset(i);
-      int stride = lattice.pairStride(i);
+      int kpp = trellis.count(i - 2);
+      int kp = trellis.count(i - 1);
+      int kc = trellis.count(i);
+      int here = trellis.start(i);
+      int prev = trellis.start(i - 1);
+      int prevRow = trellis.stride(i - 1);
+      int row = trellis.stride(i);
+      int emit = trellis.emissionStart(i);
+      int stride = trellis.emissionStride(i);
       double sum = 0;
       for (int j = 0; j < kp; j++) {
-        int tj = stateAt(i - 1, j);
+        int tj = trellis.stateAt(i - 1, j);
         for (int k = 0; k < kc; k++) {
-          int tk = stateAt(i, k);
+          int tk = trellis.stateAt(i, k);
           double a = 0;
           for (int h = 0; h < kpp; h++) {
-            a += (i == 0 ? 1 : alpha[prev + h * kp + j]) * trigram[(stateAt(i - 2, h) * states + tj) * states + tk];
+            a += (i == 0 ? 1 : alpha[prev + h * prevRow + j]) * trigram[(trellis.stateAt(i - 2, h) * states + tj) * states + tk];
           }
           a *= scaledEmission[emit + j * stride + k];
-          alpha[here + j * kc + k] = a;
+          alpha[here + j * row + k] = a;
           sum += a;
         }
       }
-      logScale += normalize(alpha, here, kp * kc, sum);
+      logScale += normalize(alpha, here, trellis.cells(i), sum);
     }
-    int kp = count(n - 2);
-    int kc = count(n - 1);
-    int last = stateStart[n - 1];
+    int kp = trellis.count(n - 2);
+    int kc = trellis.count(n - 1);
+    int last = trellis.start(n - 1);
+    int lastRow = trellis.stride(n - 1);
     double end = 0;
     double sum = 0;
     for (int j = 0; j < kp; j++) {
       for (int k = 0; k < kc; k++) {
-        double b = trigram[(stateAt(n - 2, j) * states + stateAt(n - 1, k)) * states + boundary];
-        beta[last + j * kc + k] = b;
-        end += alpha[last + j * kc + k] * b;
+        double b = trigram[(trellis.stateAt(n - 2, j) * states + trellis.stateAt(n - 1, k)) * states + boundary];
+        beta[last + j * lastRow + k] = b;
+        end += alpha[last + j * lastRow + k] * b;
         sum += b;
       }
     }
-    normalize(beta, last, kp * kc, sum);
+    normalize(beta, last, trellis.cells(n - 1), sum);
     for (int i = n - 2; i >= 0; i--) {
       // state (h at i-1, j at i) continues to (j at i, k at i+1)
-      int kh = count(i - 1);
-      int kj = count(i);
-      int kk = count(i + 1);
-      int here = stateStart[i];
-      int next = stateStart[i + 1];
-      int emit = lattice.pairOffset(i + 1);
-      int stride = lattice.pairStride(i + 1);
+      int kh = trellis.count(i - 1);
+      int kj = trellis.count(i);
+      int kk = trellis.count(i + 1);
+      int here = trellis.start(i);
+      int next = trellis.start(i + 1);
+      int row = trellis.stride(i);
+      int nextRow = trellis.stride(i + 1);
+      int emit = trellis.emissionStart(i + 1);
+      int stride = trellis.emissionStride(i + 1);
       sum = 0;
       for (int h = 0; h < kh; h++) {
-        int th = stateAt(i - 1, h);
+        int th = trellis.stateAt(i - 1, h);
         for (int j = 0; j < kj; j++) {
-          int base = (th * states + stateAt(i, j)) * states;
+          int base = (th * states + trellis.stateAt(i, j)) * states;
           double b = 0;
           for (int k = 0; k < kk; k++) {
-            b += trigram[base + stateAt(i + 1, k)] * scaledEmission[emit + j * stride + k] * beta[next + j * kk + k];
+            b += trigram[base + trellis.stateAt(i + 1, k)] * scaledEmission[emit + j * stride + k] * beta[next + j * nextRow + k];
           }
-          beta[here + h * kj + j] = b;
+          beta[here + h * row + j] = b;
           sum += b;
         }
       }
       betaSum[i] = sum;
-      normalize(beta, here, kh * kj, sum);
+      normalize(beta, here, trellis.cells(i), sum);
     }
     for (int i = 0; i < n; i++) {
-      int kpI = count(i - 1);
-      int kcI = count(i);
-      int here = stateStart[i];
+      int kpI = trellis.count(i - 1);
+      int kcI = trellis.count(i);
+      int here = trellis.start(i);
+      int row = trellis.stride(i);
       int base = lattice.candidateOffset(i);
       for (int k = 0; k < kcI; k++) {
         double p = 0;
         for (int j = 0; j < kpI; j++) {
-          p += alpha[here + j * kcI + k] * beta[here + j * kcI + k];
+          p += alpha[here + j * row + k] * beta[here + j * row + k];
         }
         posterior[base + k] = p;
       }
