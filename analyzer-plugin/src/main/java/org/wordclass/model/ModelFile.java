@@ -455,8 +455,8 @@ public final class ModelFile {
     if (maxBeginning > 0) {
       beginningTries = new AffixTrie[] {readTrie(in, limits, tagCount), readTrie(in, limits, tagCount)};
     }
-    return new UnknownWordModel(theta, maxEnding, open, logPrior, logPriorCapitalised, base, trieOfShape, tries, cue,
-        maxBeginning, beginningTries);
+    return UnknownWordModel.builder().theta(theta).openTags(open, base).logPriors(logPrior, logPriorCapitalised)
+        .endings(maxEnding, trieOfShape, tries).lowerCaseForms(cue).beginnings(maxBeginning, beginningTries).build();
   }
 
   private static AffixTrie readTrie(DataInput in, Limits limits, int tagCount) throws IOException {

@@ -62,74 +62,14 @@ public final class UnknownWordModel {
   private final double[][][] beginningFactors;
   private static final VarHandle NODE = MethodHandles.arrayElementVarHandle(double[][].class);
 
-  /**
-   * @param theta weight of the shorter ending in successive abstraction
-   * @param maxEndingLength longest ending consulted
-   * @param openTags tags an unknown word may take, ascending
-   * @param logPrior {@code log P(t)} over all training tokens, one per tag of the tag set, the
-   *     divisor for every word
-   * @param baseDistribution tag distribution over all rare words, one per open tag, summing to 1
-   * @param trieOfShape index into {@code endingTries} for each {@link WordShape} ordinal
-   * @param endingTries ending counts, one trie per group of shapes
-   */
-  public UnknownWordModel(
-      double theta,
-      int maxEndingLength,
-      int[] openTags,
-      double[] logPrior,
-      double[] baseDistribution,
-      int[] trieOfShape,
-      AffixTrie[] endingTries) {
-    this(theta, maxEndingLength, openTags, logPrior, logPrior, baseDistribution, trieOfShape, endingTries);
+  /** A model from the parts {@code b} was given; see {@link Builder} for what each is. */
+  private UnknownWordModel(Builder b) {
+    this(b.theta, b.maxEndingLength, b.openTags, b.logPrior, b.logPriorCapitalised == null ? b.logPrior
+        : b.logPriorCapitalised, b.baseDistribution, b.trieOfShape, b.endingTries, b.lowerCaseForms,
+        b.maxBeginningLength, b.beginningTries);
   }
 
-  /**
-   * @param theta weight of the shorter ending in successive abstraction
-   * @param maxEndingLength longest ending consulted
-   * @param openTags tags an unknown word may take, ascending
-   * @param logPrior the log prior each tag's probability is divided by, one per tag of the tag
-   *     set, for words not written with a capital (or in a state that does not say so)
-   * @param logPriorCapitalised the same for words in the state of words written with a capital
-   * @param baseDistribution tag distribution over all rare words, one per open tag, summing to 1
-   * @param trieOfShape index into {@code endingTries} for each {@link WordShape} ordinal
-   * @param endingTries ending counts, one trie per group of shapes
-   */
-  public UnknownWordModel(
-      double theta,
-      int maxEndingLength,
-      int[] openTags,
-      double[] logPrior,
-      double[] logPriorCapitalised,
-      double[] baseDistribution,
-      int[] trieOfShape,
-      AffixTrie[] endingTries) {
-    this(theta, maxEndingLength, openTags, logPrior, logPriorCapitalised, baseDistribution, trieOfShape, endingTries, null);
-  }
-
-  /**
-   * A model that also uses the lower-case form of capitalised words, where {@code lowerCaseForms}
-   * is not null; the other parameters as above.
-   */
-  public UnknownWordModel(
-      double theta,
-      int maxEndingLength,
-      int[] openTags,
-      double[] logPrior,
-      double[] logPriorCapitalised,
-      double[] baseDistribution,
-      int[] trieOfShape,
-      AffixTrie[] endingTries,
-      LowerCaseFormCue lowerCaseForms) {
-    this(theta, maxEndingLength, openTags, logPrior, logPriorCapitalised, baseDistribution, trieOfShape, endingTries,
-        lowerCaseForms, 0, null);
-  }
-
-  /**
-   * A model that also weighs an unknown word by its beginning, where {@code maxBeginningLength} is
-   * positive: {@code beginningTries} holds two tries of word beginnings (see {@link
-   * #beginningTries()}); the other parameters as above.
-   */
-  public UnknownWordModel(
+  private UnknownWordModel(
       double theta,
       int maxEndingLength,
       int[] openTags,
@@ -141,6 +81,9 @@ public final class UnknownWordModel {
       LowerCaseFormCue lowerCaseForms,
       int maxBeginningLength,
       AffixTrie[] beginningTries) {
+    if (openTags == null || logPrior == null || baseDistribution == null || trieOfShape == null || endingTries == null) {
+      throw new IllegalArgumentException("an unknown-word model needs open tags, priors, a base distribution and ending tries");
+    }
     if (maxBeginningLength < 0 || (maxBeginningLength > 0 && (beginningTries == null || beginningTries.length != 2))) {
       throw new IllegalArgumentException("a model of word beginnings needs two tries and a positive length: "
           + maxBeginningLength);
@@ -550,5 +493,103 @@ public final class UnknownWordModel {
       }
     }
     return bytes;
+  }
+
+  /** A builder with nothing set. */
+  public static Builder builder() {
+    return new Builder();
+  }
+
+  /** A builder holding this model's parts, to change some of them. */
+  public Builder toBuilder() {
+    return new Builder().theta(theta).endings(maxEndingLength, trieOfShape, endingTries).openTags(openTags, baseDistribution)
+        .logPriors(logPrior, logPriorCapitalised).lowerCaseForms(lowerCaseForms)
+        .beginnings(maxBeginningLength, beginningTries);
+  }
+
+  /**
+   * The parts of an unknown-word model, set by name; {@link #build} checks them together. Needed:
+   * {@link #theta}, {@link #openTags}, {@link #logPriors} and {@link #endings}; the cue of
+   * lower-case forms and the tries of word beginnings are optional.
+   */
+  public static final class Builder {
+    private double theta = Double.NaN;
+    private int maxEndingLength;
+    private int[] openTags;
+    private double[] logPrior;
+    private double[] logPriorCapitalised;
+    private double[] baseDistribution;
+    private int[] trieOfShape;
+    private AffixTrie[] endingTries;
+    private LowerCaseFormCue lowerCaseForms;
+    private int maxBeginningLength;
+    private AffixTrie[] beginningTries;
+
+    private Builder() {}
+
+    /** Weight of the shorter ending in successive abstraction; finite and positive. */
+    public Builder theta(double weight) {
+      this.theta = weight;
+      return this;
+    }
+
+    /**
+     * The tags an unknown word may take, ascending, with their distribution over all rare words
+     * (one per open tag, summing to 1).
+     */
+    public Builder openTags(int[] tags, double[] distribution) {
+      this.openTags = tags;
+      this.baseDistribution = distribution;
+      return this;
+    }
+
+    /**
+     * The log prior each tag's probability is divided by, one per tag of the tag set: for words
+     * not written with a capital (or in a state that does not say so), and for words in the
+     * state of words written with a capital.
+     */
+    public Builder logPriors(double[] plain, double[] capitalised) {
+      this.logPrior = plain;
+      this.logPriorCapitalised = capitalised;
+      return this;
+    }
+
+    /** One log prior for every word, as in a model without capitalisation states. */
+    public Builder logPrior(double[] prior) {
+      return logPriors(prior, prior);
+    }
+
+    /**
+     * The ending counts: one trie per group of shapes, {@code trieOfShape} giving the trie of each
+     * {@link WordShape} ordinal, consulted up to {@code maxLength} characters.
+     */
+    public Builder endings(int maxLength, int[] trieOfShape, AffixTrie[] tries) {
+      this.maxEndingLength = maxLength;
+      this.trieOfShape = trieOfShape;
+      this.endingTries = tries;
+      return this;
+    }
+
+    /** The cue of the lower-case forms of capitalised words; null for none. */
+    public Builder lowerCaseForms(LowerCaseFormCue cue) {
+      this.lowerCaseForms = cue;
+      return this;
+    }
+
+    /**
+     * Two tries of word beginnings, for words not written with a capital and for the others
+     * (see {@link #beginningTries()}), consulted up to {@code maxLength} characters; 0 and null
+     * for none.
+     */
+    public Builder beginnings(int maxLength, AffixTrie[] tries) {
+      this.maxBeginningLength = maxLength;
+      this.beginningTries = tries;
+      return this;
+    }
+
+    /** @throws IllegalArgumentException if the parts do not make a model together */
+    public UnknownWordModel build() {
+      return new UnknownWordModel(this);
+    }
   }
 }

@@ -71,9 +71,9 @@ class LowerCaseFormCueTest {
     int[] open = {1, 2};
     int[] shapes = new int[WordShape.values().length];
     AffixTrie[] tries = {trie.build()};
-    UnknownWordModel plain = new UnknownWordModel(1.0, 4, open, logPrior, logPrior, new double[] {0.5, 0.5}, shapes, tries);
-    UnknownWordModel weighed = new UnknownWordModel(1.0, 4, open, logPrior, logPrior, new double[] {0.5, 0.5}, shapes,
-        tries, cue());
+    UnknownWordModel plain = UnknownWordModel.builder().theta(1.0).openTags(open, new double[] {0.5, 0.5})
+        .logPrior(logPrior).endings(4, shapes, tries).build();
+    UnknownWordModel weighed = plain.toBuilder().lowerCaseForms(cue()).build();
     for (String word : new String[] {"Customer", "GREEN", "Paris", "Bakery"}) {
       double[] a = emissions(plain, word);
       double[] b = emissions(weighed, word);

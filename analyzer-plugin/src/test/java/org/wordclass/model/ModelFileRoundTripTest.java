@@ -72,8 +72,8 @@ class ModelFileRoundTripTest {
   void versionOneFileIsReadWithOnePriorForEveryWord() throws IOException {
     HmmModel small = TestModels.small();
     UnknownWordModel u = small.unknownWords();
-    UnknownWordModel onePrior = new UnknownWordModel(u.theta(), u.maxEndingLength(), u.openTags(), u.logPrior(),
-        u.baseDistribution(), u.trieOfShape(), u.endingTries());
+    UnknownWordModel onePrior = UnknownWordModel.builder().theta(u.theta()).openTags(u.openTags(), u.baseDistribution())
+        .logPrior(u.logPrior()).endings(u.maxEndingLength(), u.trieOfShape(), u.endingTries()).build();
     HmmModel model = new HmmModel(small.order(), small.tags(), small.states(), small.cues(), small.logBigramTable(),
         small.logTrigramTable(), small.lexicon(), onePrior, small.provenance());
     byte[] current = TestModels.bytes(model);

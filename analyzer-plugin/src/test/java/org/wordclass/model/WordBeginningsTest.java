@@ -25,8 +25,9 @@ class WordBeginningsTest {
     upper.add("ab", 1, 2, 2);
     double[] logPrior = {Math.log(0.2), Math.log(0.5), Math.log(0.3)};
     AffixTrie[] endings = {new AffixTrie.Builder().build()};
-    return new UnknownWordModel(THETA, 4, new int[] {1, 2}, logPrior, logPrior, BASE, new int[WordShape.values().length],
-        endings, null, 2, new AffixTrie[] {lower.build(), upper.build()});
+    return UnknownWordModel.builder().theta(THETA).openTags(new int[] {1, 2}, BASE).logPrior(logPrior)
+        .endings(4, new int[WordShape.values().length], endings).beginnings(2, new AffixTrie[] {lower.build(), upper.build()})
+        .build();
   }
 
   private static double abstracted(double own, double dist) {
@@ -71,8 +72,8 @@ class WordBeginningsTest {
   @Test
   void theFactorsReachTheEmissions() {
     UnknownWordModel m = model();
-    UnknownWordModel endingsOnly = new UnknownWordModel(THETA, 4, new int[] {1, 2}, m.logPrior(), m.logPrior(), BASE,
-        new int[WordShape.values().length], new AffixTrie[] {new AffixTrie.Builder().build()});
+    UnknownWordModel endingsOnly = m.toBuilder().beginnings(0, null)
+        .endings(4, new int[WordShape.values().length], new AffixTrie[] {new AffixTrie.Builder().build()}).build();
     char[] word = "unzipped".toCharArray();
     double[] a = new double[2];
     double[] b = new double[2];
@@ -86,9 +87,9 @@ class WordBeginningsTest {
   @Test
   void beginningsNeedTwoTries() {
     AffixTrie[] endings = {new AffixTrie.Builder().build()};
-    assertThrows(IllegalArgumentException.class, () -> new UnknownWordModel(THETA, 4, new int[] {1, 2},
-        new double[3], new double[3], BASE, new int[WordShape.values().length], endings, null, 2, endings));
-    assertThrows(IllegalArgumentException.class, () -> new UnknownWordModel(THETA, 4, new int[] {1, 2},
-        new double[3], new double[3], BASE, new int[WordShape.values().length], endings, null, -1, null));
+    UnknownWordModel.Builder b = UnknownWordModel.builder().theta(THETA).openTags(new int[] {1, 2}, BASE)
+        .logPrior(new double[3]).endings(4, new int[WordShape.values().length], endings);
+    assertThrows(IllegalArgumentException.class, () -> b.beginnings(2, endings).build());
+    assertThrows(IllegalArgumentException.class, () -> b.beginnings(-1, null).build());
   }
 }

@@ -116,8 +116,8 @@ public final class TestModels {
     AffixTrie.Builder trie = new AffixTrie.Builder();
     trie.add("zzq", open[rnd.nextInt(open.length)], 1 + rnd.nextInt(5), 3);
     trie.add("xyz", open[rnd.nextInt(open.length)], 1 + rnd.nextInt(5), 3);
-    return new UnknownWordModel(1.0, 3, open, logPrior, randomDistribution(rnd, open.length, 0),
-        new int[WordShape.values().length], new AffixTrie[] {trie.build()});
+    return UnknownWordModel.builder().theta(1.0).openTags(open, randomDistribution(rnd, open.length, 0)).logPrior(logPrior)
+        .endings(3, new int[WordShape.values().length], new AffixTrie[] {trie.build()}).build();
   }
 
   /** {@code length} tokens drawn from the model's lexicon, each unknown with probability {@code unknownRate}. */
@@ -170,10 +170,11 @@ public final class TestModels {
         // and capitalised words known in lower case ("Walks", "RUN") are weighed by that form's tag
     LowerCaseFormCue cue = new LowerCaseFormCue(new double[] {Math.log(0.5), Math.log(0.3), Math.log(0.2)},
         new double[] {1, 1, 1.5, 0.5, 0.25, 3}, 3, 2, lexicon, StateSpace.oneStatePerTag(3));
-    return new UnknownWordModel(0.75, 4, new int[] {1, 2}, new double[] {Math.log(0.4), Math.log(0.35), Math.log(0.25)},
-        new double[] {Math.log(0.5), Math.log(0.45), Math.log(0.05)}, new double[] {0.6, 0.4}, trieOfShape,
-        new AffixTrie[] {lower.build(), upper.build()}, cue, 3, new AffixTrie[] {lowerBeginnings.build(),
-            upperBeginnings.build()});
+    return UnknownWordModel.builder().theta(0.75).openTags(new int[] {1, 2}, new double[] {0.6, 0.4})
+        .logPriors(new double[] {Math.log(0.4), Math.log(0.35), Math.log(0.25)},
+            new double[] {Math.log(0.5), Math.log(0.45), Math.log(0.05)})
+        .endings(4, trieOfShape, new AffixTrie[] {lower.build(), upper.build()}).lowerCaseForms(cue)
+        .beginnings(3, new AffixTrie[] {lowerBeginnings.build(), upperBeginnings.build()}).build();
   }
 
   /** The bytes {@link ModelFile#write(HmmModel, IndexOutput)} produces for {@code model}. */

@@ -259,8 +259,8 @@ public final class HmmEstimator {
     for (int i = 0; i < trieCount; i++) {
       tries[i] = builders[i].build();
     }
-    UnknownWordModel model = new UnknownWordModel(1.0, options.maxSuffixLength(), openTags, logPrior,
-        logPriorCapitalised, base, trieOfShape, tries);
+    UnknownWordModel model = UnknownWordModel.builder().theta(1.0).openTags(openTags, base)
+        .logPriors(logPrior, logPriorCapitalised).endings(options.maxSuffixLength(), trieOfShape, tries).build();
     double theta = switch (options.suffixWeightRule()) {
       case HELD_OUT -> SuffixWeightSelection.choose(model, wordTags, finalId, options.rareWordMaxCount());
       case TAG_SPREAD -> tagProbabilitySpread(tagTokens, total);
@@ -272,8 +272,8 @@ public final class HmmEstimator {
         ? lowerCaseFormCue(counts, wordTags, finalId, openTags, tagCount, lexicon, plan) : null;
     AffixTrie[] beginningTries = options.maxPrefixLength() > 0
         ? new AffixTrie[] {beginningBuilders[0].build(), beginningBuilders[1].build()} : null;
-    return new UnknownWordModel(theta, options.maxSuffixLength(), openTags, logPrior, logPriorCapitalised, base,
-        trieOfShape, tries, cue, options.maxPrefixLength(), beginningTries);
+    return model.toBuilder().theta(theta).lowerCaseForms(cue).beginnings(options.maxPrefixLength(), beginningTries)
+        .build();
   }
 
   /**

@@ -76,8 +76,8 @@ final class RandomModels {
     for (String ending : new String[] {"ab", "ba", "bb", "aa"}) {
       trie.add("x" + ending, random.nextInt(tagCount), 1 + random.nextInt(4), 3);
     }
-    return new UnknownWordModel(0.5, 3, open, logPrior, distribution(random, tagCount),
-        new int[WordShape.values().length], new AffixTrie[] {trie.build()});
+    return UnknownWordModel.builder().theta(0.5).openTags(open, distribution(random, tagCount)).logPrior(logPrior)
+        .endings(3, new int[WordShape.values().length], new AffixTrie[] {trie.build()}).build();
   }
 
   /** A sentence of known words w.. and unknown words x..; unknown ones only if {@code withUnknown}. */
