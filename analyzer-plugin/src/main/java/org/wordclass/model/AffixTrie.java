@@ -1,11 +1,15 @@
 package org.wordclass.model;
 
+import java.io.IOException;
 import java.util.ArrayDeque;
 import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.List;
 import java.util.Map;
 import java.util.TreeMap;
+import org.apache.lucene.index.CorruptIndexException;
+import org.apache.lucene.store.DataInput;
+import org.apache.lucene.store.DataOutput;
 
 /**
  * Tag counts of word affixes, as a trie read from the last character of each added string
@@ -58,6 +62,91 @@ public final class AffixTrie {
   /** Number of words counted at {@code node}. */
   public int total(int node) {
     return total[node];
+  }
+
+  /**
+   * Writes the trie in the model file's layout ({@code docs/model-format.md}): per node in
+   * breadth-first order, its counts (tag, value) and the characters of its children.
+   */
+  void writeTo(DataOutput out) throws IOException {
+    int nodes = nodeCount();
+    out.writeVInt(nodes);
+    for (int n = 0; n < nodes; n++) {
+      out.writeVInt(countStart[n + 1] - countStart[n]);
+      for (int i = countStart[n]; i < countStart[n + 1]; i++) {
+        out.writeVInt(countTag[i]);
+        out.writeVInt(countValue[i]);
+      }
+      out.writeVInt(childStart[n + 1] - childStart[n]);
+      for (int i = childStart[n]; i < childStart[n + 1]; i++) {
+        out.writeVInt(childChar[i]);
+      }
+    }
+  }
+
+  /**
+   * Reads a trie {@link #writeTo} wrote, checking every declared size against the bytes left
+   * before allocating, every tag against {@code tagCount}, children in ascending order and one
+   * edge per node but the root.
+   *
+   * @throws CorruptIndexException or {@link ModelFormatException} for a damaged or foreign file
+   */
+  static AffixTrie readFrom(DataInput in, ModelFile.Limits limits, int tagCount) throws IOException {
+    int nodes = limits.count(ModelFile.vInt(in), 2, "trie nodes");
+    if (nodes < 1) {
+      throw new CorruptIndexException("a trie needs a root", "model");
+    }
+    int[] childStart = new int[nodes + 1];
+    int[] countStart = new int[nodes + 1];
+    IntList countTags = new IntList();
+    IntList countValues = new IntList();
+    IntList chars = new IntList();
+    for (int n = 0; n < nodes; n++) {
+      countStart[n] = countTags.size;
+      int counts = limits.count(ModelFile.vInt(in), 2, "counts of a trie node");
+      for (int i = 0; i < counts; i++) {
+        countTags.add(ModelFile.tagIndex(ModelFile.vInt(in), tagCount));
+        countValues.add(ModelFile.vInt(in));
+      }
+      childStart[n] = chars.size;
+      int children = limits.count(ModelFile.vInt(in), 1, "children of a trie node");
+      int previous = -1;
+      for (int i = 0; i < children; i++) {
+        int c = ModelFile.vInt(in);
+        if (c <= previous || c > Character.MAX_VALUE) {
+          throw new CorruptIndexException("trie characters out of order", "model");
+        }
+        chars.add(c);
+        previous = c;
+      }
+    }
+    countStart[nodes] = countTags.size;
+    childStart[nodes] = chars.size;
+    if (chars.size != nodes - 1) {
+      throw new CorruptIndexException("trie with " + nodes + " nodes has " + chars.size + " edges", "model");
+    }
+    char[] childChar = new char[chars.size];
+    for (int i = 0; i < childChar.length; i++) {
+      childChar[i] = (char) chars.values[i];
+    }
+    short[] tagsOut = new short[countTags.size];
+    for (int i = 0; i < tagsOut.length; i++) {
+      tagsOut[i] = (short) countTags.values[i];
+    }
+    return new AffixTrie(childStart, childChar, countStart, tagsOut, Arrays.copyOf(countValues.values, countValues.size));
+  }
+
+  /** Growable int array, so reading a trie does not box every number. */
+  private static final class IntList {
+    int[] values = new int[64];
+    int size;
+
+    void add(int v) {
+      if (size == values.length) {
+        values = Arrays.copyOf(values, size * 2);
+      }
+      values[size++] = v;
+    }
   }
 
   /** Mutable trie used while counting; {@link #build()} freezes it. */

@@ -153,7 +153,7 @@ public final class ModelFile {
     }
     out.writeVInt(model.endingTries().length);
     for (AffixTrie trie : model.endingTries()) {
-      writeTrie(out, trie);
+      trie.writeTo(out);
     }
     LowerCaseFormCue cue = model.lowerCaseForms();
     out.writeByte((byte) (cue == null ? 0 : 1));
@@ -164,23 +164,7 @@ public final class ModelFile {
     out.writeVInt(model.maxBeginningLength());
     if (model.maxBeginningLength() > 0) {
       for (AffixTrie trie : model.beginningTries()) {
-        writeTrie(out, trie);
-      }
-    }
-  }
-
-  private static void writeTrie(DataOutput out, AffixTrie trie) throws IOException {
-    int nodes = trie.nodeCount();
-    out.writeVInt(nodes);
-    for (int n = 0; n < nodes; n++) {
-      out.writeVInt(trie.countStart[n + 1] - trie.countStart[n]);
-      for (int i = trie.countStart[n]; i < trie.countStart[n + 1]; i++) {
-        out.writeVInt(trie.countTag[i]);
-        out.writeVInt(trie.countValue[i]);
-      }
-      out.writeVInt(trie.childStart[n + 1] - trie.childStart[n]);
-      for (int i = trie.childStart[n]; i < trie.childStart[n + 1]; i++) {
-        out.writeVInt(trie.childChar[i]);
+        trie.writeTo(out);
       }
     }
   }
@@ -317,7 +301,7 @@ public final class ModelFile {
   }
 
   /** Checks declared sizes against the bytes left in the file before anything is allocated. */
-  private record Limits(IndexInput in, String name) {
+  record Limits(IndexInput in, String name) {
     int count(long declared, int minBytesEach, String what) throws ModelFormatException {
       long left = in.length() - in.getFilePointer();
       if (declared < 0 || declared * minBytesEach > left) {
@@ -393,7 +377,7 @@ public final class ModelFile {
     return values;
   }
 
-  private static int tagIndex(int tag, int tagCount) throws CorruptIndexException {
+  static int tagIndex(int tag, int tagCount) throws CorruptIndexException {
     if (tag < 0 || tag >= tagCount) {
       throw new CorruptIndexException("tag index " + tag + " out of range", "model");
     }
@@ -442,7 +426,7 @@ public final class ModelFile {
     int trieCount = limits.count(vInt(in), 1, "ending tries");
     AffixTrie[] tries = new AffixTrie[trieCount];
     for (int i = 0; i < trieCount; i++) {
-      tries[i] = readTrie(in, limits, tagCount);
+      tries[i] = AffixTrie.readFrom(in, limits, tagCount);
     }
     LowerCaseFormCue cue = null;
     if (version >= VERSION_CAPITALISED_PRIORS && in.readByte() != 0) {
@@ -453,67 +437,11 @@ public final class ModelFile {
     int maxBeginning = version >= VERSION_CAPITALISED_PRIORS ? vInt(in) : 0;
     AffixTrie[] beginningTries = null;
     if (maxBeginning > 0) {
-      beginningTries = new AffixTrie[] {readTrie(in, limits, tagCount), readTrie(in, limits, tagCount)};
+      beginningTries = new AffixTrie[] {AffixTrie.readFrom(in, limits, tagCount), AffixTrie.readFrom(in, limits, tagCount)};
     }
     return UnknownWordModel.builder().theta(theta).openTags(open, base).logPriors(logPrior, logPriorCapitalised)
         .endings(maxEnding, trieOfShape, tries).lowerCaseForms(cue).beginnings(maxBeginning, beginningTries).build();
   }
 
-  private static AffixTrie readTrie(DataInput in, Limits limits, int tagCount) throws IOException {
-    int nodes = limits.count(vInt(in), 2, "trie nodes");
-    if (nodes < 1) {
-      throw new CorruptIndexException("a trie needs a root", "model");
-    }
-    int[] childStart = new int[nodes + 1];
-    int[] countStart = new int[nodes + 1];
-    IntList countTags = new IntList();
-    IntList countValues = new IntList();
-    IntList chars = new IntList();
-    for (int n = 0; n < nodes; n++) {
-      countStart[n] = countTags.size;
-      int counts = limits.count(vInt(in), 2, "counts of a trie node");
-      for (int i = 0; i < counts; i++) {
-        countTags.add(tagIndex(vInt(in), tagCount));
-        countValues.add(vInt(in));
-      }
-      childStart[n] = chars.size;
-      int children = limits.count(vInt(in), 1, "children of a trie node");
-      int previous = -1;
-      for (int i = 0; i < children; i++) {
-        int c = vInt(in);
-        if (c <= previous || c > Character.MAX_VALUE) {
-          throw new CorruptIndexException("trie characters out of order", "model");
-        }
-        chars.add(c);
-        previous = c;
-      }
-    }
-    countStart[nodes] = countTags.size;
-    childStart[nodes] = chars.size;
-    if (chars.size != nodes - 1) {
-      throw new CorruptIndexException("trie with " + nodes + " nodes has " + chars.size + " edges", "model");
-    }
-    char[] childChar = new char[chars.size];
-    for (int i = 0; i < childChar.length; i++) {
-      childChar[i] = (char) chars.values[i];
-    }
-    short[] tagsOut = new short[countTags.size];
-    for (int i = 0; i < tagsOut.length; i++) {
-      tagsOut[i] = (short) countTags.values[i];
-    }
-    return new AffixTrie(childStart, childChar, countStart, tagsOut, java.util.Arrays.copyOf(countValues.values, countValues.size));
-  }
 
-  /** Growable int array, so reading a trie does not box every number. */
-  private static final class IntList {
-    int[] values = new int[64];
-    int size;
-
-    void add(int v) {
-      if (size == values.length) {
-        values = java.util.Arrays.copyOf(values, size * 2);
-      }
-      values[size++] = v;
-    }
-  }
 }
