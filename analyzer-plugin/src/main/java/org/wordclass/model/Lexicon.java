@@ -1,8 +1,11 @@
 package org.wordclass.model;
 
+import java.io.IOException;
 import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.List;
+import org.apache.lucene.store.DataInput;
+import org.apache.lucene.store.DataOutput;
 
 /**
  * The words a model has seen, each with the states it may take and their emission
@@ -493,6 +496,57 @@ public final class Lexicon {
       out.add(new Entry(word(w), states, emissions, contexts, contextEmissions));
     }
     return out;
+  }
+
+  /**
+   * Writes the lexicon in the model file's layout ({@code docs/model-format.md}): per word its
+   * string, its states with their emissions and, for a word with context emissions, the
+   * previous states and emissions of each.
+   */
+  void writeTo(DataOutput out) throws IOException {
+    out.writeVInt(size());
+    for (Entry e : entries()) {
+      out.writeString(e.word());
+      out.writeVInt(e.states().length);
+      out.writeByte((byte) (e.hasContexts() ? 1 : 0));
+      for (int k = 0; k < e.states().length; k++) {
+        out.writeVInt(e.states()[k]);
+        out.writeInt(Float.floatToIntBits(e.logEmissions()[k]));
+        if (e.hasContexts()) {
+          out.writeVInt(e.contextStates()[k].length);
+          for (int j = 0; j < e.contextStates()[k].length; j++) {
+            out.writeVInt(e.contextStates()[k][j]);
+            out.writeInt(Float.floatToIntBits(e.contextLogEmissions()[k][j]));
+          }
+        }
+      }
+    }
+  }
+
+  /**
+   * Reads a lexicon {@link #writeTo} wrote, straight into the flat arrays ({@link Builder}),
+   * checking every declared size against the bytes left before allocating and every state
+   * against {@code stateCount} (the boundary allowed as a previous state).
+   */
+  static Lexicon readFrom(DataInput in, ModelFile.Limits limits, int stateCount) throws IOException {
+    int words = limits.count(ModelFile.vInt(in), 4, "lexicon words");
+    Builder lexicon = new Builder(words);
+    for (int w = 0; w < words; w++) {
+      String word = limits.string();
+      int n = limits.count(ModelFile.vInt(in), 5, "states of a word");
+      boolean contexts = in.readByte() != 0;
+      lexicon.startWord(word, contexts);
+      for (int k = 0; k < n; k++) {
+        lexicon.addState(ModelFile.tagIndex(ModelFile.vInt(in), stateCount), Float.intBitsToFloat(in.readInt()));
+        if (contexts) {
+          int m = limits.count(ModelFile.vInt(in), 5, "contexts of a word");
+          for (int j = 0; j < m; j++) {
+            lexicon.addContext(ModelFile.tagIndex(ModelFile.vInt(in), stateCount + 1), Float.intBitsToFloat(in.readInt()));
+          }
+        }
+      }
+    }
+    return lexicon.build();
   }
 
   /** Approximate heap size in bytes. */

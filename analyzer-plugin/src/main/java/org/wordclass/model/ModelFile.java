@@ -91,7 +91,7 @@ public final class ModelFile {
     out.writeLong(Double.doubleToLongBits(model.cues().unseenContextLogWeight()));
     writeFloats(out, model.logBigramTable());
     writeFloats(out, model.logTrigramTable());
-    writeLexicon(out, model.lexicon());
+    model.lexicon().writeTo(out);
     writeUnknownWords(out, model.unknownWords(), tags.size());
     CodecUtil.writeFooter(out);
   }
@@ -114,26 +114,6 @@ public final class ModelFile {
   private static void writeFloats(DataOutput out, double[] values) throws IOException {
     for (double v : values) {
       out.writeInt(Float.floatToIntBits((float) v));
-    }
-  }
-
-  private static void writeLexicon(DataOutput out, Lexicon lexicon) throws IOException {
-    out.writeVInt(lexicon.size());
-    for (Lexicon.Entry e : lexicon.entries()) {
-      out.writeString(e.word());
-      out.writeVInt(e.states().length);
-      out.writeByte((byte) (e.hasContexts() ? 1 : 0));
-      for (int k = 0; k < e.states().length; k++) {
-        out.writeVInt(e.states()[k]);
-        out.writeInt(Float.floatToIntBits(e.logEmissions()[k]));
-        if (e.hasContexts()) {
-          out.writeVInt(e.contextStates()[k].length);
-          for (int j = 0; j < e.contextStates()[k].length; j++) {
-            out.writeVInt(e.contextStates()[k][j]);
-            out.writeInt(Float.floatToIntBits(e.contextLogEmissions()[k][j]));
-          }
-        }
-      }
     }
   }
 
@@ -295,7 +275,7 @@ public final class ModelFile {
     long n = states.size() + 1;
     double[] logBigram = readFloats(in, limits.count(n * n, 4, "bigram entries"));
     double[] logTrigram = readFloats(in, limits.count(n * n * n, 4, "trigram entries"));
-    Lexicon lexicon = readLexicon(in, limits, states.size());
+    Lexicon lexicon = Lexicon.readFrom(in, limits, states.size());
     UnknownWordModel unknown = readUnknownWords(in, limits, tagCount, version, lexicon, states);
     return new HmmModel(order, tags, states, cues, logBigram, logTrigram, lexicon, unknown, provenance);
   }
@@ -382,27 +362,6 @@ public final class ModelFile {
       throw new CorruptIndexException("tag index " + tag + " out of range", "model");
     }
     return tag;
-  }
-
-  private static Lexicon readLexicon(DataInput in, Limits limits, int stateCount) throws IOException {
-    int words = limits.count(vInt(in), 4, "lexicon words");
-    Lexicon.Builder lexicon = new Lexicon.Builder(words);
-    for (int w = 0; w < words; w++) {
-      String word = limits.string();
-      int n = limits.count(vInt(in), 5, "states of a word");
-      boolean contexts = in.readByte() != 0;
-      lexicon.startWord(word, contexts);
-      for (int k = 0; k < n; k++) {
-        lexicon.addState(tagIndex(vInt(in), stateCount), Float.intBitsToFloat(in.readInt()));
-        if (contexts) {
-          int m = limits.count(vInt(in), 5, "contexts of a word");
-          for (int j = 0; j < m; j++) {
-            lexicon.addContext(tagIndex(vInt(in), stateCount + 1), Float.intBitsToFloat(in.readInt()));
-          }
-        }
-      }
-    }
-    return lexicon.build();
   }
 
   private static UnknownWordModel readUnknownWords(DataInput in, Limits limits, int tagCount, int version,
