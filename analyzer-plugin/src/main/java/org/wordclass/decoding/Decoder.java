@@ -11,9 +11,13 @@ import org.wordclass.model.HmmModel;
  * <p>Cost per token with K candidates per token: Viterbi O(K^2) at order 1 and O(K^3) at order
  * 2; forward-backward about twice that. Memory is O(n K^2) for n tokens, in buffers that are
  * kept and reused, so steady-state decoding allocates nothing. Forward-backward runs in linear
- * space with one scale factor per token, so long sequences do not underflow. After it, {@link
- * #addExpectedTransitions} gives the expected transition counts that Baum-Welch re-estimation
- * needs, at the cost of one more forward-like pass.
+ * space with one scale factor per token, so long sequences do not underflow. What it leaves is
+ * readable ({@link #scaledForward} and the methods beside it), so that training code computes
+ * its expectations outside the search engine's jar.
+ *
+ * <p>Where each cell of the trellis lies is {@link Trellis}'s to say: the kernels ask it for a
+ * position's first cell and strides ({@code start + j * stride + k}, the same form for cells and
+ * emissions) rather than working the layout out themselves.
  *
  * <p>Not thread-safe: one per thread; the model it reads is shared.
  */
@@ -30,9 +34,8 @@ public final class Decoder {
   private final float[] logTrigram;
   private final double[] bigram;
   private final double[] trigram;
-  private final int[] boundaryState;
+  private final Trellis trellis;
 
-  private int[] stateStart = new int[65];
   private double[] score = new double[1024];
   private int[] backPointer = new int[1024];
   private double[] alpha = new double[1024];
@@ -68,7 +71,7 @@ public final class Decoder {
     this.logTrigram = model.logTrigramFloats();
     this.bigram = model.bigramTable();
     this.trigram = model.trigramTable();
-    this.boundaryState = new int[] {boundary};
+    this.trellis = new Trellis(lattice, order, boundary);
   }
 
   public HmmModel model() {
@@ -84,41 +87,10 @@ public final class Decoder {
     return lattice;
   }
 
-  /** Candidates of a position, with the virtual boundary positions -1 and -2 holding one. */
-  private int count(int position) {
-    return position < 0 ? 1 : lattice.candidateCount(position);
-  }
-
-  /**
-   * The array holding the candidate states of {@code position} from {@link #statesFrom}: the
-   * lattice's, or the boundary alone for the virtual positions before the sequence. Inner loops
-   * index it directly instead of testing the position per candidate.
-   */
-  private int[] statesAt(int position) {
-    return position < 0 ? boundaryState : lattice.candidateStates();
-  }
-
-  private int statesFrom(int position) {
-    return position < 0 ? 0 : lattice.candidateOffset(position);
-  }
-
-  /** The state of candidate {@code k}, or the boundary before the sequence. */
-  private int tagAt(int position, int k) {
-    return position < 0 ? boundary : lattice.candidateState(position, k);
-  }
-
-  /** Lays out one state per (previous candidate, candidate) pair (order 2) or per candidate (order 1). */
+  /** Lays out the trellis ({@link Trellis}) and makes the buffers hold its cells. */
   private int layOutStates() {
     int n = lattice.size();
-    if (stateStart.length < n + 1) {
-      stateStart = new int[Math.max(n + 1, stateStart.length * 2)];
-    }
-    int total = 0;
-    for (int i = 0; i < n; i++) {
-      stateStart[i] = total;
-      total += order == 2 ? count(i - 1) * count(i) : count(i);
-    }
-    stateStart[n] = total;
+    int total = trellis.layOut();
     if (betaSum.length < n) {
       betaSum = new double[Math.max(n, betaSum.length * 2)];
     }
@@ -169,16 +141,16 @@ public final class Decoder {
     double[] emissions = lattice.pairLogEmissions();
     int[] current = lattice.candidateStates();
     for (int i = 0; i < n; i++) {
-      int kp = count(i - 1);
-      int kc = count(i);
-      int here = stateStart[i];
+      int kp = trellis.count(i - 1);
+      int kc = trellis.count(i);
+      int here = trellis.start(i);
       double[] prevScore = i == 0 ? START_SCORE : score;
-      int prev = i == 0 ? 0 : stateStart[i - 1];
-      int[] previous = statesAt(i - 1);
-      int po = statesFrom(i - 1);
+      int prev = trellis.start(i - 1);
+      int[] previous = trellis.statesAt(i - 1);
+      int po = trellis.statesFrom(i - 1);
       int co = lattice.candidateOffset(i);
-      int emit = lattice.pairOffset(i);
-      int stride = lattice.pairStride(i);
+      int emit = trellis.emissionStart(i);
+      int stride = trellis.emissionStride(i);
       for (int k = 0; k < kc; k++) {
         int tk = current[co + k];
         double top = Double.NEGATIVE_INFINITY;
@@ -194,11 +166,11 @@ public final class Decoder {
         backPointer[here + k] = arg;
       }
     }
-    int last = stateStart[n - 1];
+    int last = trellis.start(n - 1);
     double top = Double.NEGATIVE_INFINITY;
     int arg = 0;
-    for (int k = 0; k < count(n - 1); k++) {
-      double s = score[last + k] + logBigram[tagAt(n - 1, k) * states + boundary];
+    for (int k = 0; k < trellis.count(n - 1); k++) {
+      double s = score[last + k] + logBigram[trellis.stateAt(n - 1, k) * states + boundary];
       if (s > top) {
         top = s;
         arg = k;
@@ -207,7 +179,7 @@ public final class Decoder {
     bestLogProbability = top;
     for (int i = n - 1; i >= 0; i--) {
       best[i] = arg;
-      arg = backPointer[stateStart[i] + arg];
+      arg = backPointer[trellis.start(i) + arg];
     }
   }
 
@@ -216,23 +188,25 @@ public final class Decoder {
     int[] current = lattice.candidateStates();
     int plane = states * states;
     for (int i = 0; i < n; i++) {
-      int kpp = count(i - 2);
+      int kpp = trellis.count(i - 2);
       if (planeOf.length < kpp) {
         planeOf = new int[kpp];
         column = new double[kpp];
       }
-      int kp = count(i - 1);
-      int kc = count(i);
-      int here = stateStart[i];
+      int kp = trellis.count(i - 1);
+      int kc = trellis.count(i);
+      int here = trellis.start(i);
       double[] prevScore = i == 0 ? START_SCORE : score;
-      int prev = i == 0 ? 0 : stateStart[i - 1];
-      int[] first = statesAt(i - 2);
-      int fo = statesFrom(i - 2);
-      int[] previous = statesAt(i - 1);
-      int po = statesFrom(i - 1);
+      int prev = trellis.start(i - 1);
+      int prevRow = trellis.stride(i - 1);
+      int row = trellis.stride(i);
+      int[] first = trellis.statesAt(i - 2);
+      int fo = trellis.statesFrom(i - 2);
+      int[] previous = trellis.statesAt(i - 1);
+      int po = trellis.statesFrom(i - 1);
       int co = lattice.candidateOffset(i);
-      int emit = lattice.pairOffset(i);
-      int stride = lattice.pairStride(i);
+      int emit = trellis.emissionStart(i);
+      int stride = trellis.emissionStride(i);
       for (int h = 0; h < kpp; h++) {
         planeOf[h] = first[fo + h] * plane;
       }
@@ -240,9 +214,9 @@ public final class Decoder {
         int tj = previous[po + j];
         // the scores of (h, j) for every h, gathered once for all k
         for (int h = 0; h < kpp; h++) {
-          column[h] = prevScore[prev + h * kp + j];
+          column[h] = prevScore[prev + h * prevRow + j];
         }
-        int cell = here + j * kc;
+        int cell = here + j * row;
         int emitted = emit + j * stride;
         for (int k = 0; k < kc; k++) {
           // (th * states + tj) * states + tk, with the part that does not depend on h taken out
@@ -258,15 +232,16 @@ public final class Decoder {
         }
       }
     }
-    int kp = count(n - 2);
-    int kc = count(n - 1);
-    int last = stateStart[n - 1];
+    int kp = trellis.count(n - 2);
+    int kc = trellis.count(n - 1);
+    int last = trellis.start(n - 1);
+    int lastRow = trellis.stride(n - 1);
     double top = Double.NEGATIVE_INFINITY;
     int argJ = 0;
     int argK = 0;
     for (int j = 0; j < kp; j++) {
       for (int k = 0; k < kc; k++) {
-        double s = score[last + j * kc + k] + logTrigram[(tagAt(n - 2, j) * states + tagAt(n - 1, k)) * states + boundary];
+        double s = score[last + j * lastRow + k] + logTrigram[(trellis.stateAt(n - 2, j) * states + trellis.stateAt(n - 1, k)) * states + boundary];
         if (s > top) {
           top = s;
           argJ = j;
@@ -290,17 +265,17 @@ public final class Decoder {
    * h whose score plus transition equals the best, computed exactly as the forward pass did.
    */
   private int bestBefore(int i, int j, int k) {
-    int kpp = count(i - 2);
+    int kpp = trellis.count(i - 2);
     if (kpp == 1) {
       return 0;
     }
-    int kp = count(i - 1);
-    int prev = stateStart[i - 1];
-    int last = tagAt(i - 1, j) * states + tagAt(i, k);
+    int prev = trellis.start(i - 1);
+    int prevRow = trellis.stride(i - 1);
+    int last = trellis.stateAt(i - 1, j) * states + trellis.stateAt(i, k);
     double top = Double.NEGATIVE_INFINITY;
     int arg = 0;
     for (int h = 0; h < kpp; h++) {
-      double s = score[prev + h * kp + j] + logTrigram[tagAt(i - 2, h) * states * states + last];
+      double s = score[prev + h * prevRow + j] + logTrigram[trellis.stateAt(i - 2, h) * states * states + last];
       if (s > top) {
         top = s;
         arg = h;
@@ -328,10 +303,10 @@ public final class Decoder {
     for (int i = 0; i < n; i++) {
       int base = lattice.candidateOffset(i);
       double sum = 0;
-      for (int k = 0; k < count(i); k++) {
+      for (int k = 0; k < trellis.count(i); k++) {
         sum += posterior[base + k];
       }
-      for (int k = 0; k < count(i); k++) {
+      for (int k = 0; k < trellis.count(i); k++) {
         posterior[base + k] /= sum;
       }
     }
@@ -344,28 +319,44 @@ public final class Decoder {
   }
 
   /**
-   * After {@link #forwardBackward} at order 1: the forward weight of the {@code k}-th candidate
-   * of {@code position} (the probability of the tokens up to and including it, ending in that
-   * candidate) and, below, its backward weight (of the tokens after it, given that candidate).
-   * Each is scaled by a factor shared by all candidates of the position, so their product is
-   * proportional to the posterior. Split-merge training reads them to estimate what merging two
-   * states would cost without decoding again.
+   * After {@link #forwardBackward}, the read-only view of what it computed that training code
+   * (Baum-Welch and latent sub-states, in the model builder) takes its expectations from: the
+   * forward weight of cell {@code cell} of {@code position} (the probability of the tokens up to
+   * and including it, ending in that cell). A position's cells are its candidates at order 1,
+   * and its (previous candidate j, candidate k) pairs at order 2, cell {@code j * K + k} for K
+   * candidates. Each weight is scaled by a factor shared by all cells of the position, so forward
+   * times backward is proportional to the posterior.
    */
-  public double scaledForward(int position, int k) {
-    requireFirstOrder();
-    return alpha[stateStart[position] + k];
+  public double scaledForward(int position, int cell) {
+    return alpha[trellis.start(position) + cell];
   }
 
-  /** The backward weight of a candidate; see {@link #scaledForward}. */
-  public double scaledBackward(int position, int k) {
-    requireFirstOrder();
-    return beta[stateStart[position] + k];
+  /** The backward weight of a cell (of the tokens after it, given the cell); see {@link #scaledForward}. */
+  public double scaledBackward(int position, int cell) {
+    return beta[trellis.start(position) + cell];
   }
 
-  private void requireFirstOrder() {
-    if (order != 1) {
-      throw new IllegalStateException("forward and backward weights per candidate exist at order 1 only");
-    }
+  /**
+   * The sum of the backward weights of {@code position} before they were scaled to sum to 1,
+   * for every position but the last: the unscaled backward weight of a cell is this times
+   * {@link #scaledBackward}.
+   */
+  public double backwardSum(int position) {
+    return betaSum[position];
+  }
+
+  /**
+   * {@code exp} of the emission of candidate {@code k} of {@code position} after candidate
+   * {@code j} of the position before, minus the largest emission of the position, as
+   * forward-backward multiplies it.
+   */
+  public double scaledEmission(int position, int j, int k) {
+    return scaledEmission[trellis.emissionStart(position) + j * trellis.emissionStride(position) + k];
+  }
+
+  /** The log-likelihood the last {@link #forwardBackward} returned (negative infinity before any). */
+  public double lastLogLikelihood() {
+    return lastLogLikelihood;
   }
 
   /**
@@ -396,118 +387,13 @@ public final class Decoder {
     }
   }
 
-  /**
-   * Adds to {@code counts} the expected number of times each transition is taken in the sequence
-   * of the last {@link #forwardBackward} call, given the whole sequence: the expectation step of
-   * Baum-Welch (forward-backward) re-estimation. At order 1 these are the pair posteriors
-   * ξ(j, k) summed over positions, indexed like {@link HmmModel#bigramIndex}; at order 2 the
-   * expected trigram counts over (h, j, k), indexed like {@link HmmModel#trigramIndex}. The
-   * transitions from and to the sentence boundary are included, so a sequence of n tokens adds
-   * n + 1 in total. The expected emission counts are the candidate posteriors, {@link #posterior}.
-   *
-   * <p>Cost: one more pass like the forward pass, O(n K^2) at order 1 and O(n K^3) at order 2. It
-   * reuses the scaled forward and backward values that forwardBackward kept, with the per-position
-   * normaliser of the backward pass, and allocates nothing. An empty sequence, or one the model
-   * gives probability zero, adds nothing. The lattice must not change in between.
-   *
-   * @param counts {@code (T+1)^2} entries at order 1, {@code (T+1)^3} at order 2
-   */
-  public void addExpectedTransitions(double[] counts) {
-    int expected = order == 2 ? states * states * states : states * states;
-    if (counts.length != expected) {
-      throw new IllegalArgumentException("expected " + expected + " transition counts, got " + counts.length);
-    }
-    int n = lattice.size();
-    if (n == 0 || lastLogLikelihood == Double.NEGATIVE_INFINITY) {
-      return;
-    }
-    if (order == 2) {
-      addExpectedTrigrams(counts, n);
-    } else {
-      addExpectedBigrams(counts, n);
-    }
-  }
-
-  private void addExpectedBigrams(double[] counts, int n) {
-    for (int k = 0; k < count(0); k++) {
-      counts[boundary * states + tagAt(0, k)] += posterior(0, k);
-    }
-    for (int i = 0; i + 1 < n; i++) {
-      int here = stateStart[i];
-      int next = stateStart[i + 1];
-      int emit = lattice.pairOffset(i + 1);
-      int stride = lattice.pairStride(i + 1);
-      int kk = count(i + 1);
-      // the unnormalised backward value at i is betaSum[i] * beta, so this makes the ξ of i sum to 1
-      double norm = 1.0 / (betaSum[i] * overlap(here, count(i)));
-      for (int j = 0; j < count(i); j++) {
-        double a = alpha[here + j] * norm;
-        int row = tagAt(i, j) * states;
-        for (int k = 0; k < kk; k++) {
-          int index = row + tagAt(i + 1, k);
-          counts[index] += a * bigram[index] * scaledEmission[emit + j * stride + k] * beta[next + k];
-        }
-      }
-    }
-    for (int k = 0; k < count(n - 1); k++) {
-      counts[tagAt(n - 1, k) * states + boundary] += posterior(n - 1, k);
-    }
-  }
-
-  private void addExpectedTrigrams(double[] counts, int n) {
-    for (int k = 0; k < count(0); k++) {
-      counts[(boundary * states + boundary) * states + tagAt(0, k)] += posterior(0, k);
-    }
-    for (int i = 0; i + 1 < n; i++) {
-      int kh = count(i - 1);
-      int kj = count(i);
-      int kk = count(i + 1);
-      int here = stateStart[i];
-      int next = stateStart[i + 1];
-      int emit = lattice.pairOffset(i + 1);
-      int stride = lattice.pairStride(i + 1);
-      double norm = 1.0 / (betaSum[i] * overlap(here, kh * kj));
-      for (int h = 0; h < kh; h++) {
-        int th = tagAt(i - 1, h);
-        for (int j = 0; j < kj; j++) {
-          double a = alpha[here + h * kj + j] * norm;
-          int base = (th * states + tagAt(i, j)) * states;
-          for (int k = 0; k < kk; k++) {
-            int index = base + tagAt(i + 1, k);
-            counts[index] += a * trigram[index] * scaledEmission[emit + j * stride + k] * beta[next + j * kk + k];
-          }
-        }
-      }
-    }
-    int kj = count(n - 2);
-    int kk = count(n - 1);
-    int last = stateStart[n - 1];
-    double norm = 1.0 / overlap(last, kj * kk);
-    for (int j = 0; j < kj; j++) {
-      int base = (tagAt(n - 2, j) * states) * states;
-      for (int k = 0; k < kk; k++) {
-        int state = last + j * kk + k;
-        counts[base + tagAt(n - 1, k) * states + boundary] += alpha[state] * beta[state] * norm;
-      }
-    }
-  }
-
-  /** Sum of alpha * beta over {@code count} states: the normaliser of their scaled posteriors. */
-  private double overlap(int from, int count) {
-    double sum = 0;
-    for (int x = from; x < from + count; x++) {
-      sum += alpha[x] * beta[x];
-    }
-    return sum;
-  }
-
   /** Stores exp(emission - max emission of the token), and the sum of the maxima for the likelihood. */
   private void scaleEmissions(int n) {
     maxEmissionSum = 0;
     double[] pairs = lattice.pairLogEmissions();
     for (int i = 0; i < n; i++) {
-      int from = lattice.pairOffset(i);
-      int to = lattice.pairOffset(i + 1);
+      int from = trellis.emissionStart(i);
+      int to = trellis.emissionStart(i + 1);
       double max = Double.NEGATIVE_INFINITY;
       for (int p = from; p < to; p++) {
         max = Math.max(max, pairs[p]);
@@ -522,57 +408,57 @@ public final class Decoder {
   private double forwardBackwardFirstOrder(int n) {
     double logScale = maxEmissionSum;
     for (int i = 0; i < n; i++) {
-      int kp = count(i - 1);
-      int here = stateStart[i];
-      int prev = i == 0 ? 0 : stateStart[i - 1];
-      int emit = lattice.pairOffset(i);
-      int stride = lattice.pairStride(i);
-      int kc = count(i);
+      int kp = trellis.count(i - 1);
+      int here = trellis.start(i);
+      int prev = trellis.start(i - 1);
+      int emit = trellis.emissionStart(i);
+      int stride = trellis.emissionStride(i);
+      int kc = trellis.count(i);
       double sum = 0;
       for (int k = 0; k < kc; k++) {
-        int tk = tagAt(i, k);
+        int tk = trellis.stateAt(i, k);
         double a = 0;
         for (int j = 0; j < kp; j++) {
-          a += (i == 0 ? 1 : alpha[prev + j]) * bigram[tagAt(i - 1, j) * states + tk] * scaledEmission[emit + j * stride + k];
+          a += (i == 0 ? 1 : alpha[prev + j]) * bigram[trellis.stateAt(i - 1, j) * states + tk] * scaledEmission[emit + j * stride + k];
         }
         alpha[here + k] = a;
         sum += a;
       }
-      logScale += normalize(alpha, here, count(i), sum);
+      logScale += normalize(alpha, here, trellis.cells(i), sum);
     }
-    int last = stateStart[n - 1];
+    int last = trellis.start(n - 1);
     double end = 0;
     double sum = 0;
-    for (int k = 0; k < count(n - 1); k++) {
-      double b = bigram[tagAt(n - 1, k) * states + boundary];
+    for (int k = 0; k < trellis.count(n - 1); k++) {
+      double b = bigram[trellis.stateAt(n - 1, k) * states + boundary];
       beta[last + k] = b;
       end += alpha[last + k] * b;
       sum += b;
     }
-    normalize(beta, last, count(n - 1), sum);
+    normalize(beta, last, trellis.cells(n - 1), sum);
     for (int i = n - 2; i >= 0; i--) {
-      int here = stateStart[i];
-      int next = stateStart[i + 1];
-      int emit = lattice.pairOffset(i + 1);
-      int stride = lattice.pairStride(i + 1);
-      int kn = count(i + 1);
+      int here = trellis.start(i);
+      int next = trellis.start(i + 1);
+      int emit = trellis.emissionStart(i + 1);
+      int stride = trellis.emissionStride(i + 1);
+      int kn = trellis.count(i + 1);
       sum = 0;
-      for (int j = 0; j < count(i); j++) {
-        int tj = tagAt(i, j);
+      for (int j = 0; j < trellis.count(i); j++) {
+        int tj = trellis.stateAt(i, j);
         double b = 0;
         for (int k = 0; k < kn; k++) {
-          b += bigram[tj * states + tagAt(i + 1, k)] * scaledEmission[emit + j * stride + k] * beta[next + k];
+          b += bigram[tj * states + trellis.stateAt(i + 1, k)] * scaledEmission[emit + j * stride + k] * beta[next + k];
         }
         beta[here + j] = b;
         sum += b;
       }
       betaSum[i] = sum;
-      normalize(beta, here, count(i), sum);
+      normalize(beta, here, trellis.cells(i), sum);
     }
     for (int i = 0; i < n; i++) {
-      int here = stateStart[i];
+      int here = trellis.start(i);
       int base = lattice.candidateOffset(i);
-      for (int k = 0; k < count(i); k++) {
+      for (int k = 0; k < trellis.count(i); k++) {
         posterior[base + k] = alpha[here + k] * beta[here + k];
       }
     }
@@ -582,77 +468,83 @@ public final class Decoder {
   private double forwardBackwardSecondOrder(int n) {
     double logScale = maxEmissionSum;
     for (int i = 0; i < n; i++) {
-      int kpp = count(i - 2);
-      int kp = count(i - 1);
-      int kc = count(i);
-      int here = stateStart[i];
-      int prev = i == 0 ? 0 : stateStart[i - 1];
-      int emit = lattice.pairOffset(i);
-      int stride = lattice.pairStride(i);
+      int kpp = trellis.count(i - 2);
+      int kp = trellis.count(i - 1);
+      int kc = trellis.count(i);
+      int here = trellis.start(i);
+      int prev = trellis.start(i - 1);
+      int prevRow = trellis.stride(i - 1);
+      int row = trellis.stride(i);
+      int emit = trellis.emissionStart(i);
+      int stride = trellis.emissionStride(i);
       double sum = 0;
       for (int j = 0; j < kp; j++) {
-        int tj = tagAt(i - 1, j);
+        int tj = trellis.stateAt(i - 1, j);
         for (int k = 0; k < kc; k++) {
-          int tk = tagAt(i, k);
+          int tk = trellis.stateAt(i, k);
           double a = 0;
           for (int h = 0; h < kpp; h++) {
-            a += (i == 0 ? 1 : alpha[prev + h * kp + j]) * trigram[(tagAt(i - 2, h) * states + tj) * states + tk];
+            a += (i == 0 ? 1 : alpha[prev + h * prevRow + j]) * trigram[(trellis.stateAt(i - 2, h) * states + tj) * states + tk];
           }
           a *= scaledEmission[emit + j * stride + k];
-          alpha[here + j * kc + k] = a;
+          alpha[here + j * row + k] = a;
           sum += a;
         }
       }
-      logScale += normalize(alpha, here, kp * kc, sum);
+      logScale += normalize(alpha, here, trellis.cells(i), sum);
     }
-    int kp = count(n - 2);
-    int kc = count(n - 1);
-    int last = stateStart[n - 1];
+    int kp = trellis.count(n - 2);
+    int kc = trellis.count(n - 1);
+    int last = trellis.start(n - 1);
+    int lastRow = trellis.stride(n - 1);
     double end = 0;
     double sum = 0;
     for (int j = 0; j < kp; j++) {
       for (int k = 0; k < kc; k++) {
-        double b = trigram[(tagAt(n - 2, j) * states + tagAt(n - 1, k)) * states + boundary];
-        beta[last + j * kc + k] = b;
-        end += alpha[last + j * kc + k] * b;
+        double b = trigram[(trellis.stateAt(n - 2, j) * states + trellis.stateAt(n - 1, k)) * states + boundary];
+        beta[last + j * lastRow + k] = b;
+        end += alpha[last + j * lastRow + k] * b;
         sum += b;
       }
     }
-    normalize(beta, last, kp * kc, sum);
+    normalize(beta, last, trellis.cells(n - 1), sum);
     for (int i = n - 2; i >= 0; i--) {
       // state (h at i-1, j at i) continues to (j at i, k at i+1)
-      int kh = count(i - 1);
-      int kj = count(i);
-      int kk = count(i + 1);
-      int here = stateStart[i];
-      int next = stateStart[i + 1];
-      int emit = lattice.pairOffset(i + 1);
-      int stride = lattice.pairStride(i + 1);
+      int kh = trellis.count(i - 1);
+      int kj = trellis.count(i);
+      int kk = trellis.count(i + 1);
+      int here = trellis.start(i);
+      int next = trellis.start(i + 1);
+      int row = trellis.stride(i);
+      int nextRow = trellis.stride(i + 1);
+      int emit = trellis.emissionStart(i + 1);
+      int stride = trellis.emissionStride(i + 1);
       sum = 0;
       for (int h = 0; h < kh; h++) {
-        int th = tagAt(i - 1, h);
+        int th = trellis.stateAt(i - 1, h);
         for (int j = 0; j < kj; j++) {
-          int base = (th * states + tagAt(i, j)) * states;
+          int base = (th * states + trellis.stateAt(i, j)) * states;
           double b = 0;
           for (int k = 0; k < kk; k++) {
-            b += trigram[base + tagAt(i + 1, k)] * scaledEmission[emit + j * stride + k] * beta[next + j * kk + k];
+            b += trigram[base + trellis.stateAt(i + 1, k)] * scaledEmission[emit + j * stride + k] * beta[next + j * nextRow + k];
           }
-          beta[here + h * kj + j] = b;
+          beta[here + h * row + j] = b;
           sum += b;
         }
       }
       betaSum[i] = sum;
-      normalize(beta, here, kh * kj, sum);
+      normalize(beta, here, trellis.cells(i), sum);
     }
     for (int i = 0; i < n; i++) {
-      int kpI = count(i - 1);
-      int kcI = count(i);
-      int here = stateStart[i];
+      int kpI = trellis.count(i - 1);
+      int kcI = trellis.count(i);
+      int here = trellis.start(i);
+      int row = trellis.stride(i);
       int base = lattice.candidateOffset(i);
       for (int k = 0; k < kcI; k++) {
         double p = 0;
         for (int j = 0; j < kpI; j++) {
-          p += alpha[here + j * kcI + k] * beta[here + j * kcI + k];
+          p += alpha[here + j * row + k] * beta[here + j * row + k];
         }
         posterior[base + k] = p;
       }

@@ -3,6 +3,7 @@ package org.wordclass.decoding;
 import java.util.Arrays;
 import org.wordclass.model.HmmModel;
 import org.wordclass.model.Lexicon;
+import org.wordclass.model.Spelling;
 import org.wordclass.model.StateSpace;
 import org.wordclass.model.UnknownWordModel;
 
@@ -26,7 +27,6 @@ public final class Lattice {
   private final double[] unknownScores;
   /** {@link #unknownPlan} for lower-case (0) and capitalised (1) unknown words. */
   private final int[][] unknownPlan;
-  private char[] lowerCased = new char[32];
   private int size;
   private int[] candidateStart = new int[65];
   private int[] candidateState = new int[256];
@@ -82,7 +82,7 @@ public final class Lattice {
    */
   public void add(char[] buf, int off, int len, int tag) {
     ensureTokenCapacity(size + 1);
-    int flags = splitsByCapital && size > 0 && startsWithCapital(buf, off, len) ? StateSpace.CAPITALISED : 0;
+    int flags = splitsByCapital && size > 0 && Spelling.startsWithCapital(buf, off, len) ? StateSpace.CAPITALISED : 0;
     int word = lookup(buf, off, len);
     wordId[size] = word;
     int start = candidateStart[size];
@@ -113,10 +113,6 @@ public final class Lattice {
     return (tag < 0 || states.tagOf(state) == tag) && (anyCase || !splitsByCapital || states.flags(state) == flags);
   }
 
-  private static boolean startsWithCapital(char[] buf, int off, int len) {
-    return len > 0 && (Character.isUpperCase(buf[off]) || Character.isTitleCase(buf[off]));
-  }
-
   private CandidateSource sourceOf(int word) {
     if (word < 0) {
       return CandidateSource.UNKNOWN;
@@ -135,12 +131,8 @@ public final class Lattice {
     Lexicon lexicon = model.lexicon();
     int word = lexicon.lookup(buf, off, len);
     foundLowerCased = false;
-    if (size == 0 && startsWithCapital(buf, off, len) && lowerCaseFirst(word)) {
-      if (lowerCased.length < len) {
-        lowerCased = new char[Math.max(len, 2 * lowerCased.length)];
-      }
-      lowerCase(buf, off, len, lowerCased);
-      int lower = lexicon.lookup(lowerCased, 0, len);
+    if (size == 0 && Spelling.startsWithCapital(buf, off, len) && lowerCaseFirst(word)) {
+      int lower = lexicon.lookupLowerCased(buf, off, len);
       foundLowerCased = lower >= 0;
       word = foundLowerCased ? lower : word;
     }
@@ -156,8 +148,8 @@ public final class Lattice {
       return false; // a user's entry is taken as given
     }
     // training puts every first word in a state "not capitalised": none means never seen first
-    for (int k = 0; k < model.lexicon().tagCount(word); k++) {
-      if (states.flags(model.lexicon().tag(word, k)) == 0) {
+    for (int k = 0; k < model.lexicon().stateCount(word); k++) {
+      if (states.flags(model.lexicon().state(word, k)) == 0) {
         return false;
       }
     }
@@ -169,27 +161,18 @@ public final class Lattice {
    * CandidateSource#LOWERCASED_FIRST_WORD}); allocates, for explanations.
    */
   public static String lowerCasedForm(char[] buf, int off, int len) {
-    char[] lower = new char[len];
-    lowerCase(buf, off, len, lower);
-    return new String(lower);
-  }
-
-  /** Character by character, so that the form keeps the token's length and no locale changes it. */
-  private static void lowerCase(char[] buf, int off, int len, char[] out) {
-    for (int i = 0; i < len; i++) {
-      out[i] = Character.toLowerCase(buf[off + i]);
-    }
+    return Spelling.lowerCase(new String(buf, off, len));
   }
 
   private int addKnown(int word, int flags, int tag, int start) {
     Lexicon lexicon = model.lexicon();
-    int n = lexicon.tagCount(word);
+    int n = lexicon.stateCount(word);
     ensureCandidateCapacity(start + n);
     int end = start;
     for (int pass = 0; pass < 2 && end == start; pass++) {
       // first pass: states that match how the token is written; if none do, all of them
       for (int k = 0; k < n; k++) {
-        int state = lexicon.tag(word, k);
+        int state = lexicon.state(word, k);
         if (admits(state, tag, flags, pass == 1)) {
           candidateState[end] = state;
           candidateLogEmission[end] = lexicon.logEmission(word, k);
@@ -337,7 +320,7 @@ public final class Lattice {
 
   /**
    * Which of its word's lexicon states the {@code k}-th candidate of {@code position} is (its
-   * index {@code k'} for {@link org.wordclass.model.Lexicon#tag(int, int)}), or -1 for an unknown
+   * index {@code k'} for {@link org.wordclass.model.Lexicon#state(int, int)}), or -1 for an unknown
    * word. Not always {@code k}: where tags are split by capitalisation, only the states that
    * match how the token is written are candidates.
    */

@@ -18,7 +18,7 @@ import java.util.TreeMap;
  * {@link #bigramIndex} and {@link #trigramIndex}.
  *
  * <p>Immutable and safe to share between threads; one loaded copy serves every analyzer.
- * Memory: {@code 16 (T+1)^3} bytes for the trigram tables plus the lexicon and the suffix tries.
+ * Memory: {@code 16 (T+1)^3} bytes for the trigram tables plus the lexicon and the tries of word endings and beginnings.
  */
 public final class HmmModel {
   private final int order;

@@ -1,18 +1,22 @@
 package org.wordclass.model;
 
+import java.io.IOException;
 import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.List;
+import org.apache.lucene.store.DataInput;
+import org.apache.lucene.store.DataOutput;
 
 /**
- * The words a model has seen, each with the tags it may take and their emission
- * log-probabilities {@code log P(word | tag)}. Restricting a known word to its own tags (the
- * lexicon constraint) keeps decoding exact and fast.
+ * The words a model has seen, each with the states it may take and their emission
+ * log-probabilities {@code log P(word | state)}; a state is a tag, or a tag split further (by
+ * capitalisation or latent sub-states, see {@link StateSpace}). Restricting a known word to its
+ * own states (the lexicon constraint) keeps decoding exact and fast.
  *
  * <p>Words live in one {@code char[]} and are found through an open-addressing hash table that
  * is probed straight from a token's char buffer, so a lookup builds no String and allocates
  * nothing. Memory: about 2 bytes per character, 20 to 30 bytes per word (the hash table is kept
- * between three-eighths and three-quarters full), 10 bytes per word/tag pair, and 4 bytes per
+ * between three-eighths and three-quarters full), 10 bytes per word/state pair, and 4 bytes per
  * state for each pair with context emissions (one row of {@link #contextLogEmissionInRow}).
  * Words put in by a {@link UserLexicon} are marked ({@link #isUserListed}), so that decoding
  * can say a token's classes were fixed by the user. Immutable and safe to share between threads.
@@ -23,22 +27,22 @@ public final class Lexicon {
    * for each state optionally its emission log-probabilities after particular previous states
    * ({@code contextStates[k]} ascending, {@code contextLogEmissions[k]} beside them).
    */
-  public record Entry(String word, int[] tags, float[] logEmissions, int[][] contextStates, float[][] contextLogEmissions) {
+  public record Entry(String word, int[] states, float[] logEmissions, int[][] contextStates, float[][] contextLogEmissions) {
     private static final int[][] NO_STATES = new int[0][];
     private static final float[][] NO_EMISSIONS = new float[0][];
 
     public Entry {
-      if (tags.length == 0 || tags.length != logEmissions.length) {
-        throw new IllegalArgumentException("word '" + word + "' needs one or more tags with one emission each");
+      if (states.length == 0 || states.length != logEmissions.length) {
+        throw new IllegalArgumentException("word '" + word + "' needs one or more states with one emission each");
       }
-      if (contextStates.length != contextLogEmissions.length || (contextStates.length != 0 && contextStates.length != tags.length)) {
+      if (contextStates.length != contextLogEmissions.length || (contextStates.length != 0 && contextStates.length != states.length)) {
         throw new IllegalArgumentException("word '" + word + "' has context emissions for some of its states only");
       }
     }
 
     /** An entry without context-dependent emissions. */
-    public Entry(String word, int[] tags, float[] logEmissions) {
-      this(word, tags, logEmissions, NO_STATES, NO_EMISSIONS);
+    public Entry(String word, int[] states, float[] logEmissions) {
+      this(word, states, logEmissions, NO_STATES, NO_EMISSIONS);
     }
 
     /** Whether the entry has context-dependent emissions. */
@@ -55,8 +59,8 @@ public final class Lexicon {
    * array rather than two, so a probe touches one cache line.
    */
   private final long[] slots;
-  private final int[] tagStart;
-  private final short[] tagIds;
+  private final int[] stateStart;
+  private final short[] stateIds;
   private final float[] logEmissions;
   /** Per word/state pair {@code p}: its contexts are {@code contextStart[p] .. contextStart[p+1]}. */
   private final int[] contextStart;
@@ -91,8 +95,8 @@ public final class Lexicon {
     Builder builder = new Builder(entries.size());
     for (Entry e : entries) {
       builder.startWord(e.word(), e.hasContexts());
-      for (int k = 0; k < e.tags().length; k++) {
-        builder.addState(e.tags()[k], e.logEmissions()[k]);
+      for (int k = 0; k < e.states().length; k++) {
+        builder.addState(e.states()[k], e.logEmissions()[k]);
         for (int j = 0; e.hasContexts() && j < e.contextStates()[k].length; j++) {
           builder.addContext(e.contextStates()[k][j], e.contextLogEmissions()[k][j]);
         }
@@ -113,8 +117,8 @@ public final class Lexicon {
     private int[] wordStart;
     private boolean[] hasContexts;
     private int words;
-    private int[] tagStart;
-    private short[] tagIds;
+    private int[] stateStart;
+    private short[] stateIds;
     private float[] logEmissions;
     private int[] contextStart;
     private int tags;
@@ -127,9 +131,9 @@ public final class Lexicon {
       int n = Math.max(16, expectedWords);
       chars = new char[8 * n];
       wordStart = new int[n + 1];
-      tagStart = new int[n + 1];
+      stateStart = new int[n + 1];
       hasContexts = new boolean[n];
-      tagIds = new short[2 * n];
+      stateIds = new short[2 * n];
       logEmissions = new float[2 * n];
       contextStart = new int[2 * n + 1];
       contextState = new short[n];
@@ -142,7 +146,7 @@ public final class Lexicon {
       if (words + 1 >= wordStart.length) {
         int grown = 2 * wordStart.length;
         wordStart = Arrays.copyOf(wordStart, grown);
-        tagStart = Arrays.copyOf(tagStart, grown);
+        stateStart = Arrays.copyOf(stateStart, grown);
         hasContexts = Arrays.copyOf(hasContexts, grown);
       }
       if (charCount + word.length() > chars.length) {
@@ -151,7 +155,7 @@ public final class Lexicon {
       word.getChars(0, word.length(), chars, charCount);
       wordStart[words] = charCount;
       charCount += word.length();
-      tagStart[words] = tags;
+      stateStart[words] = tags;
       hasContexts[words] = withContexts;
       words++;
       lastWord = word;
@@ -164,11 +168,11 @@ public final class Lexicon {
       }
       if (tags + 1 >= contextStart.length) {
         int grown = 2 * contextStart.length;
-        tagIds = Arrays.copyOf(tagIds, grown);
+        stateIds = Arrays.copyOf(stateIds, grown);
         logEmissions = Arrays.copyOf(logEmissions, grown);
         contextStart = Arrays.copyOf(contextStart, grown);
       }
-      tagIds[tags] = (short) state;
+      stateIds[tags] = (short) state;
       logEmissions[tags] = logEmission;
       contextStart[tags] = contexts;
       tags++;
@@ -176,7 +180,7 @@ public final class Lexicon {
 
     /** Adds an emission of the current word's last state after the previous state {@code previous}. */
     public void addContext(int previous, float logEmission) {
-      if (tags == 0 || !hasContexts[words - 1] || tagStart[words - 1] == tags) {
+      if (tags == 0 || !hasContexts[words - 1] || stateStart[words - 1] == tags) {
         throw new IllegalArgumentException("word '" + lastWord + "' has context emissions for some of its states only");
       }
       if (contexts == contextState.length) {
@@ -194,8 +198,8 @@ public final class Lexicon {
     }
 
     private void finishWord() {
-      if (words > 0 && tagStart[words - 1] == tags) {
-        throw new IllegalArgumentException("word '" + lastWord + "' needs one or more tags with one emission each");
+      if (words > 0 && stateStart[words - 1] == tags) {
+        throw new IllegalArgumentException("word '" + lastWord + "' needs one or more states with one emission each");
       }
     }
   }
@@ -210,10 +214,10 @@ public final class Lexicon {
     chars = Arrays.copyOf(b.chars, b.charCount);
     wordStart = Arrays.copyOf(b.wordStart, words + 1);
     wordStart[words] = b.charCount;
-    tagStart = Arrays.copyOf(b.tagStart, words + 1);
-    tagStart[words] = b.tags;
+    stateStart = Arrays.copyOf(b.stateStart, words + 1);
+    stateStart[words] = b.tags;
     hasContexts = Arrays.copyOf(b.hasContexts, words);
-    tagIds = Arrays.copyOf(b.tagIds, b.tags);
+    stateIds = Arrays.copyOf(b.stateIds, b.tags);
     logEmissions = Arrays.copyOf(b.logEmissions, b.tags);
     contextStart = Arrays.copyOf(b.contextStart, b.tags + 1);
     contextState = Arrays.copyOf(b.contextState, b.contexts);
@@ -284,7 +288,20 @@ public final class Lexicon {
     for (int i = off, end = off + len; i < end; i++) {
       h = 31 * h + buf[i];
     }
-    // finalisation step of MurmurHash3, so that similar words spread over the table
+    return spread(h);
+  }
+
+  /** {@link #hash} of the lower-case form of {@code buf[off..off+len)}, lower-cased on the fly. */
+  private static int hashLowerCased(char[] buf, int off, int len) {
+    int h = 0;
+    for (int i = off, end = off + len; i < end; i++) {
+      h = 31 * h + Spelling.lowerCase(buf[i]);
+    }
+    return spread(h);
+  }
+
+  /** The finalisation step of MurmurHash3, so that similar words spread over the table. */
+  private static int spread(int h) {
     h ^= h >>> 16;
     h *= 0x85ebca6b;
     h ^= h >>> 13;
@@ -330,41 +347,67 @@ public final class Lexicon {
     return lookup(word.toCharArray(), 0, word.length());
   }
 
+  /**
+   * Id of the lower-case form ({@link Spelling#lowerCase(char)}) of {@code buf[off..off+len)},
+   * or -1 if that form is not in the lexicon: the same table as {@link #lookup}, hashed and
+   * compared lower-casing the token on the fly, so that it allocates and copies nothing. What a
+   * capitalised first word and the cue of lower-case forms look words up by.
+   */
+  public int lookupLowerCased(char[] buf, int off, int len) {
+    int mask = slots.length - 1;
+    int h = hashLowerCased(buf, off, len);
+    int slot = h & mask;
+    long entry;
+    while ((entry = slots[slot]) != 0) {
+      if ((int) (entry >>> 32) == h && equalsLowerCased((int) entry - 1, buf, off, len)) {
+        return (int) entry - 1;
+      }
+      slot = (slot + 1) & mask;
+    }
+    return -1;
+  }
+
+  private boolean equalsLowerCased(int word, char[] buf, int off, int len) {
+    int start = wordStart[word];
+    if (wordStart[word + 1] - start != len) {
+      return false;
+    }
+    for (int i = 0; i < len; i++) {
+      if (chars[start + i] != Spelling.lowerCase(buf[off + i])) {
+        return false;
+      }
+    }
+    return true;
+  }
+
+  /** Whether word {@code word} is written in lower case (and not empty). */
+  public boolean isLowerCase(int word) {
+    int start = wordStart[word];
+    int len = wordStart[word + 1] - start;
+    return len > 0 && Spelling.isLowerCase(chars, start, len);
+  }
+
   public int size() {
     return wordStart.length - 1;
-  }
-
-  /**
-   * The characters of all words, word w from {@code wordStarts()[w]} to {@code wordStarts()[w +
-   * 1]}: for the classes of this package that index the words without copying them. Not to be
-   * modified.
-   */
-  char[] allChars() {
-    return chars;
-  }
-
-  /** Where each word starts in {@link #allChars}, and one more entry for the end. Not to be modified. */
-  int[] wordStarts() {
-    return wordStart;
   }
 
   public String word(int word) {
     return new String(chars, wordStart[word], wordStart[word + 1] - wordStart[word]);
   }
 
-  /** Number of tags the word may take. */
-  public int tagCount(int word) {
-    return tagStart[word + 1] - tagStart[word];
+  /** Number of states the word may take (its tags, in a model with one state per tag). */
+  public int stateCount(int word) {
+    return stateStart[word + 1] - stateStart[word];
   }
 
-  /** The {@code k}-th tag of the word. */
-  public int tag(int word, int k) {
-    return tagIds[tagStart[word] + k];
+  /** The {@code k}-th state of the word, ascending in {@code k}. */
+  public int state(int word, int k) {
+    return stateIds[stateStart[word] + k];
   }
 
-  /** Emission log-probability of the word under its {@code k}-th tag. */
+  /** Emission log-probability of the word in its {@code k}-th state. */
   public float logEmission(int word, int k) {
-    return logEmissions[tagStart[word] + k];
+    return logEmissions[stateStart[word] + k];
   }
 
   /** Whether the word's classes were set by a user lexicon rather than learnt by the model. */
@@ -401,7 +444,7 @@ public final class Lexicon {
    * per candidate and then reads one value per previous state.
    */
   public int contextRow(int word, int k) {
-    return contextRow[tagStart[word] + k];
+    return contextRow[stateStart[word] + k];
   }
 
   /** The emission in {@code row} right after state {@code previous}, or NaN if that context was not seen. */
@@ -415,32 +458,32 @@ public final class Lexicon {
   }
 
   /**
-   * Position of the word's {@code k}-th tag among all {@link #pairCount()} word/tag pairs, for
+   * Position of the word's {@code k}-th state among all {@link #pairCount()} word/state pairs, for
    * tools that keep one number per pair in a flat array (such as expected counts).
    */
   public int pairIndex(int word, int k) {
-    return tagStart[word] + k;
+    return stateStart[word] + k;
   }
 
-  /** Total number of word/tag pairs. */
+  /** Total number of word/state pairs. */
   public int pairCount() {
-    return tagIds.length;
+    return stateIds.length;
   }
 
   /** The entries in id order, for writing and inspecting. */
   public List<Entry> entries() {
     List<Entry> out = new ArrayList<>(size());
     for (int w = 0; w < size(); w++) {
-      int n = tagCount(w);
-      int[] tags = new int[n];
+      int n = stateCount(w);
+      int[] states = new int[n];
       float[] emissions = new float[n];
       int[][] contexts = new int[hasContexts[w] ? n : 0][];
       float[][] contextEmissions = new float[hasContexts[w] ? n : 0][];
       for (int k = 0; k < n; k++) {
-        tags[k] = tag(w, k);
+        states[k] = state(w, k);
         emissions[k] = logEmission(w, k);
         if (hasContexts[w]) {
-          int pair = tagStart[w] + k;
+          int pair = stateStart[w] + k;
           int from = contextStart[pair];
           int to = contextStart[pair + 1];
           contexts[k] = new int[to - from];
@@ -450,14 +493,65 @@ public final class Lexicon {
           }
         }
       }
-      out.add(new Entry(word(w), tags, emissions, contexts, contextEmissions));
+      out.add(new Entry(word(w), states, emissions, contexts, contextEmissions));
     }
     return out;
   }
 
+  /**
+   * Writes the lexicon in the model file's layout ({@code docs/model-format.md}): per word its
+   * string, its states with their emissions and, for a word with context emissions, the
+   * previous states and emissions of each.
+   */
+  void writeTo(DataOutput out) throws IOException {
+    out.writeVInt(size());
+    for (Entry e : entries()) {
+      out.writeString(e.word());
+      out.writeVInt(e.states().length);
+      out.writeByte((byte) (e.hasContexts() ? 1 : 0));
+      for (int k = 0; k < e.states().length; k++) {
+        out.writeVInt(e.states()[k]);
+        out.writeInt(Float.floatToIntBits(e.logEmissions()[k]));
+        if (e.hasContexts()) {
+          out.writeVInt(e.contextStates()[k].length);
+          for (int j = 0; j < e.contextStates()[k].length; j++) {
+            out.writeVInt(e.contextStates()[k][j]);
+            out.writeInt(Float.floatToIntBits(e.contextLogEmissions()[k][j]));
+          }
+        }
+      }
+    }
+  }
+
+  /**
+   * Reads a lexicon {@link #writeTo} wrote, straight into the flat arrays ({@link Builder}),
+   * checking every declared size against the bytes left before allocating and every state
+   * against {@code stateCount} (the boundary allowed as a previous state).
+   */
+  static Lexicon readFrom(DataInput in, ModelFile.Limits limits, int stateCount) throws IOException {
+    int words = limits.count(ModelFile.vInt(in), 4, "lexicon words");
+    Builder lexicon = new Builder(words);
+    for (int w = 0; w < words; w++) {
+      String word = limits.string();
+      int n = limits.count(ModelFile.vInt(in), 5, "states of a word");
+      boolean contexts = in.readByte() != 0;
+      lexicon.startWord(word, contexts);
+      for (int k = 0; k < n; k++) {
+        lexicon.addState(ModelFile.tagIndex(ModelFile.vInt(in), stateCount), Float.intBitsToFloat(in.readInt()));
+        if (contexts) {
+          int m = limits.count(ModelFile.vInt(in), 5, "contexts of a word");
+          for (int j = 0; j < m; j++) {
+            lexicon.addContext(ModelFile.tagIndex(ModelFile.vInt(in), stateCount + 1), Float.intBitsToFloat(in.readInt()));
+          }
+        }
+      }
+    }
+    return lexicon.build();
+  }
+
   /** Approximate heap size in bytes. */
   public long ramBytesUsed() {
-    return 2L * chars.length + 4L * (wordStart.length + 2 * slots.length + tagStart.length) + 10L * tagIds.length
+    return 2L * chars.length + 4L * (wordStart.length + 2 * slots.length + stateStart.length) + 10L * stateIds.length
         + 6L * contextState.length + (userListed == null ? 1 : 2) * words() + 4L * (contextRow.length + denseContext.length);
   }
 

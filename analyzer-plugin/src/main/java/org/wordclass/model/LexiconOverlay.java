@@ -81,8 +81,8 @@ public final class LexiconOverlay {
     Arrays.fill(floor, Float.POSITIVE_INFINITY);
     float overall = Float.POSITIVE_INFINITY;
     for (int w = 0; w < lexicon.size(); w++) {
-      for (int k = 0; k < lexicon.tagCount(w); k++) {
-        int state = lexicon.tag(w, k);
+      for (int k = 0; k < lexicon.stateCount(w); k++) {
+        int state = lexicon.state(w, k);
         floor[state] = Math.min(floor[state], lexicon.logEmission(w, k));
         overall = Math.min(overall, floor[state]);
       }
@@ -115,7 +115,7 @@ public final class LexiconOverlay {
     for (Map.Entry<Integer, Double> e : bonusOfState.entrySet()) {
       int state = e.getKey();
       double bonus = e.getValue();
-      int j = known == null ? -1 : indexOf(known.tags(), state);
+      int j = known == null ? -1 : indexOf(known.states(), state);
       ids[k] = state;
       emissions[k] = (float) ((j >= 0 ? known.logEmissions()[j] : floor[state]) + bonus);
       if (contexts) {

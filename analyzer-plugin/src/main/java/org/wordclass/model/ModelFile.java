@@ -102,7 +102,7 @@ public final class ModelFile {
     out.writeLong(Double.doubleToLongBits(model.cues().unseenContextLogWeight()));
     writeFloats(out, model.logBigramTable());
     writeFloats(out, model.logTrigramTable());
-    writeLexicon(out, model.lexicon());
+    model.lexicon().writeTo(out);
     writeUnknownWords(out, model.unknownWords(), tags.size());
     CodecUtil.writeFooter(out);
   }
@@ -128,29 +128,9 @@ public final class ModelFile {
     }
   }
 
-  private static void writeLexicon(DataOutput out, Lexicon lexicon) throws IOException {
-    out.writeVInt(lexicon.size());
-    for (Lexicon.Entry e : lexicon.entries()) {
-      out.writeString(e.word());
-      out.writeVInt(e.tags().length);
-      out.writeByte((byte) (e.hasContexts() ? 1 : 0));
-      for (int k = 0; k < e.tags().length; k++) {
-        out.writeVInt(e.tags()[k]);
-        out.writeInt(Float.floatToIntBits(e.logEmissions()[k]));
-        if (e.hasContexts()) {
-          out.writeVInt(e.contextStates()[k].length);
-          for (int j = 0; j < e.contextStates()[k].length; j++) {
-            out.writeVInt(e.contextStates()[k][j]);
-            out.writeInt(Float.floatToIntBits(e.contextLogEmissions()[k][j]));
-          }
-        }
-      }
-    }
-  }
-
   private static void writeUnknownWords(DataOutput out, UnknownWordModel model, int tagCount) throws IOException {
     out.writeLong(Double.doubleToLongBits(model.theta()));
-    out.writeVInt(model.maxSuffixLength());
+    out.writeVInt(model.maxEndingLength());
     int[] open = model.openTags();
     out.writeVInt(open.length);
     for (int t : open) {
@@ -162,9 +142,9 @@ public final class ModelFile {
     for (int t : model.trieOfShape()) {
       out.writeVInt(t);
     }
-    out.writeVInt(model.tries().length);
-    for (SuffixTrie trie : model.tries()) {
-      writeTrie(out, trie);
+    out.writeVInt(model.endingTries().length);
+    for (AffixTrie trie : model.endingTries()) {
+      trie.writeTo(out);
     }
     LowerCaseFormCue cue = model.lowerCaseForms();
     out.writeByte((byte) (cue == null ? 0 : 1));
@@ -172,26 +152,10 @@ public final class ModelFile {
       writeDoubles(out, cue.logStatePrior());
       writeDoubles(out, cue.factors());
     }
-    out.writeVInt(model.maxPrefixLength());
-    if (model.maxPrefixLength() > 0) {
-      for (SuffixTrie trie : model.prefixTries()) {
-        writeTrie(out, trie);
-      }
-    }
-  }
-
-  private static void writeTrie(DataOutput out, SuffixTrie trie) throws IOException {
-    int nodes = trie.nodeCount();
-    out.writeVInt(nodes);
-    for (int n = 0; n < nodes; n++) {
-      out.writeVInt(trie.countStart[n + 1] - trie.countStart[n]);
-      for (int i = trie.countStart[n]; i < trie.countStart[n + 1]; i++) {
-        out.writeVInt(trie.countTag[i]);
-        out.writeVInt(trie.countValue[i]);
-      }
-      out.writeVInt(trie.childStart[n + 1] - trie.childStart[n]);
-      for (int i = trie.childStart[n]; i < trie.childStart[n + 1]; i++) {
-        out.writeVInt(trie.childChar[i]);
+    out.writeVInt(model.maxBeginningLength());
+    if (model.maxBeginningLength() > 0) {
+      for (AffixTrie trie : model.beginningTries()) {
+        trie.writeTo(out);
       }
     }
   }
@@ -322,7 +286,7 @@ public final class ModelFile {
     long n = states.size() + 1;
     double[] logBigram = readFloats(in, limits.count(n * n, 4, "bigram entries"));
     double[] logTrigram = readFloats(in, limits.count(n * n * n, 4, "trigram entries"));
-    Lexicon lexicon = readLexicon(in, limits, states.size());
+    Lexicon lexicon = Lexicon.readFrom(in, limits, states.size());
     UnknownWordModel unknown = readUnknownWords(in, limits, tagCount, version, lexicon, states);
     return new HmmModel(order, tags, states, cues, logBigram, logTrigram, lexicon, unknown, provenance);
   }
@@ -341,7 +305,7 @@ public final class ModelFile {
   }
 
   /** Checks declared sizes against the bytes left in the file before anything is allocated. */
-  private record Limits(IndexInput in, String name) {
+  record Limits(IndexInput in, String name) {
     int count(long declared, int minBytesEach, String what) throws ModelFormatException {
       long left = in.length() - in.getFilePointer();
       if (declared < 0 || declared * minBytesEach > left) {
@@ -417,39 +381,18 @@ public final class ModelFile {
     return values;
   }
 
-  private static int tagIndex(int tag, int tagCount) throws CorruptIndexException {
+  static int tagIndex(int tag, int tagCount) throws CorruptIndexException {
     if (tag < 0 || tag >= tagCount) {
       throw new CorruptIndexException("tag index " + tag + " out of range", "model");
     }
     return tag;
   }
 
-  private static Lexicon readLexicon(DataInput in, Limits limits, int stateCount) throws IOException {
-    int words = limits.count(vInt(in), 4, "lexicon words");
-    Lexicon.Builder lexicon = new Lexicon.Builder(words);
-    for (int w = 0; w < words; w++) {
-      String word = limits.string();
-      int n = limits.count(vInt(in), 5, "states of a word");
-      boolean contexts = in.readByte() != 0;
-      lexicon.startWord(word, contexts);
-      for (int k = 0; k < n; k++) {
-        lexicon.addState(tagIndex(vInt(in), stateCount), Float.intBitsToFloat(in.readInt()));
-        if (contexts) {
-          int m = limits.count(vInt(in), 5, "contexts of a word");
-          for (int j = 0; j < m; j++) {
-            lexicon.addContext(tagIndex(vInt(in), stateCount + 1), Float.intBitsToFloat(in.readInt()));
-          }
-        }
-      }
-    }
-    return lexicon.build();
-  }
-
   private static UnknownWordModel readUnknownWords(DataInput in, Limits limits, int tagCount, int version,
       Lexicon lexicon, StateSpace states)
       throws IOException {
     double theta = Double.longBitsToDouble(in.readLong());
-    int maxSuffix = vInt(in);
+    int maxEnding = vInt(in);
     int openCount = limits.count(vInt(in), 1, "open tags");
     int[] open = new int[openCount];
     for (int i = 0; i < openCount; i++) {
@@ -463,10 +406,10 @@ public final class ModelFile {
     for (int i = 0; i < trieOfShape.length; i++) {
       trieOfShape[i] = vInt(in);
     }
-    int trieCount = limits.count(vInt(in), 1, "suffix tries");
-    SuffixTrie[] tries = new SuffixTrie[trieCount];
+    int trieCount = limits.count(vInt(in), 1, "ending tries");
+    AffixTrie[] tries = new AffixTrie[trieCount];
     for (int i = 0; i < trieCount; i++) {
-      tries[i] = readTrie(in, limits, tagCount);
+      tries[i] = AffixTrie.readFrom(in, limits, tagCount);
     }
     LowerCaseFormCue cue = null;
     if (version >= VERSION_CAPITALISED_PRIORS && in.readByte() != 0) {
@@ -474,70 +417,14 @@ public final class ModelFile {
       double[] factors = readDoubles(in, limits.count((long) tagCount * openCount, 8, "lower-case form factors"));
       cue = new LowerCaseFormCue(logStatePrior, factors, tagCount, openCount, lexicon, states);
     }
-    int maxPrefix = version >= VERSION_CAPITALISED_PRIORS ? vInt(in) : 0;
-    SuffixTrie[] prefixTries = null;
-    if (maxPrefix > 0) {
-      prefixTries = new SuffixTrie[] {readTrie(in, limits, tagCount), readTrie(in, limits, tagCount)};
+    int maxBeginning = version >= VERSION_CAPITALISED_PRIORS ? vInt(in) : 0;
+    AffixTrie[] beginningTries = null;
+    if (maxBeginning > 0) {
+      beginningTries = new AffixTrie[] {AffixTrie.readFrom(in, limits, tagCount), AffixTrie.readFrom(in, limits, tagCount)};
     }
-    return new UnknownWordModel(theta, maxSuffix, open, logPrior, logPriorCapitalised, base, trieOfShape, tries, cue,
-        maxPrefix, prefixTries);
+    return UnknownWordModel.builder().theta(theta).openTags(open, base).logPriors(logPrior, logPriorCapitalised)
+        .endings(maxEnding, trieOfShape, tries).lowerCaseForms(cue).beginnings(maxBeginning, beginningTries).build();
   }
 
-  private static SuffixTrie readTrie(DataInput in, Limits limits, int tagCount) throws IOException {
-    int nodes = limits.count(vInt(in), 2, "suffix nodes");
-    if (nodes < 1) {
-      throw new CorruptIndexException("a suffix trie needs a root", "model");
-    }
-    int[] childStart = new int[nodes + 1];
-    int[] countStart = new int[nodes + 1];
-    IntList countTags = new IntList();
-    IntList countValues = new IntList();
-    IntList chars = new IntList();
-    for (int n = 0; n < nodes; n++) {
-      countStart[n] = countTags.size;
-      int counts = limits.count(vInt(in), 2, "counts of a suffix");
-      for (int i = 0; i < counts; i++) {
-        countTags.add(tagIndex(vInt(in), tagCount));
-        countValues.add(vInt(in));
-      }
-      childStart[n] = chars.size;
-      int children = limits.count(vInt(in), 1, "children of a suffix");
-      int previous = -1;
-      for (int i = 0; i < children; i++) {
-        int c = vInt(in);
-        if (c <= previous || c > Character.MAX_VALUE) {
-          throw new CorruptIndexException("suffix characters out of order", "model");
-        }
-        chars.add(c);
-        previous = c;
-      }
-    }
-    countStart[nodes] = countTags.size;
-    childStart[nodes] = chars.size;
-    if (chars.size != nodes - 1) {
-      throw new CorruptIndexException("suffix trie with " + nodes + " nodes has " + chars.size + " edges", "model");
-    }
-    char[] childChar = new char[chars.size];
-    for (int i = 0; i < childChar.length; i++) {
-      childChar[i] = (char) chars.values[i];
-    }
-    short[] tagsOut = new short[countTags.size];
-    for (int i = 0; i < tagsOut.length; i++) {
-      tagsOut[i] = (short) countTags.values[i];
-    }
-    return new SuffixTrie(childStart, childChar, countStart, tagsOut, java.util.Arrays.copyOf(countValues.values, countValues.size));
-  }
 
-  /** Growable int array, so reading a trie does not box every number. */
-  private static final class IntList {
-    int[] values = new int[64];
-    int size;
-
-    void add(int v) {
-      if (size == values.length) {
-        values = java.util.Arrays.copyOf(values, size * 2);
-      }
-      values[size++] = v;
-    }
-  }
 }

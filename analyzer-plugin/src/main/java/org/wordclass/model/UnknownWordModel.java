@@ -18,7 +18,7 @@ import java.util.Arrays;
  *   <li>where the model has them, two further cues multiply that distribution: what the word's
  *       lower-case form mostly is, for a word written with a capital ({@link LowerCaseFormCue}),
  *       and the tags of rare words with the same first letters, {@code P(t | beginning) / P(t)}
- *       ({@link #prefixFactor}), as if beginning and ending were independent given the tag;
+ *       ({@link #beginningFactor}), as if beginning and ending were independent given the tag;
  *   <li>the result is inverted with Bayes' rule, {@code P(w|s) ∝ P(s|w) / P(s)}; the factor
  *       {@code P(w)} is the same for every tag of a token and cancels in decoding. The divisor
  *       is kept twice, for words written with a capital and for the others: where a model
@@ -39,17 +39,17 @@ import java.util.Arrays;
  */
 public final class UnknownWordModel {
   private final double theta;
-  private final int maxSuffixLength;
+  private final int maxEndingLength;
   private final int[] openTags;
   private final double[] logPrior;
   private final double[] logPriorCapitalised;
   private final double[] baseDistribution;
   private final int[] trieOfShape;
   private final LowerCaseFormCue lowerCaseForms;
-  private final int maxPrefixLength;
-  private final SuffixTrie[] prefixTries;
-  private final int[][] openOfPrefixCount;
-  private final SuffixTrie[] tries;
+  private final int maxBeginningLength;
+  private final AffixTrie[] beginningTries;
+  private final int[][] openOfBeginningCount;
+  private final AffixTrie[] endingTries;
   /**
    * Per trie, per count entry: the index of its tag among the open tags, or -1 for a closed
    * tag. Found once here rather than by a binary search for every count of every ending that
@@ -58,92 +58,35 @@ public final class UnknownWordModel {
   private final int[][] openOfCount;
   /** Per trie and node, {@code log P(t | ending)} over the open tags once a word has reached it, else null. */
   private final double[][][] endingDistribution;
-  /** Per beginning trie and node, the logarithm of {@link #prefixFactor} of each open tag once a word has reached it, else null. */
+  /** Per beginning trie and node, the logarithm of {@link #beginningFactor} of each open tag once a word has reached it, else null. */
   private final double[][][] beginningFactors;
   private static final VarHandle NODE = MethodHandles.arrayElementVarHandle(double[][].class);
 
-  /**
-   * @param theta weight of the shorter ending in successive abstraction
-   * @param maxSuffixLength longest ending consulted
-   * @param openTags tags an unknown word may take, ascending
-   * @param logPrior {@code log P(t)} over all training tokens, one per tag of the tag set, the
-   *     divisor for every word
-   * @param baseDistribution tag distribution over all rare words, one per open tag, summing to 1
-   * @param trieOfShape index into {@code tries} for each {@link WordShape} ordinal
-   * @param tries ending counts, one trie per group of shapes
-   */
-  public UnknownWordModel(
-      double theta,
-      int maxSuffixLength,
-      int[] openTags,
-      double[] logPrior,
-      double[] baseDistribution,
-      int[] trieOfShape,
-      SuffixTrie[] tries) {
-    this(theta, maxSuffixLength, openTags, logPrior, logPrior, baseDistribution, trieOfShape, tries);
+  /** A model from the parts {@code b} was given; see {@link Builder} for what each is. */
+  private UnknownWordModel(Builder b) {
+    this(b.theta, b.maxEndingLength, b.openTags, b.logPrior, b.logPriorCapitalised == null ? b.logPrior
+        : b.logPriorCapitalised, b.baseDistribution, b.trieOfShape, b.endingTries, b.lowerCaseForms,
+        b.maxBeginningLength, b.beginningTries);
   }
 
-  /**
-   * @param theta weight of the shorter ending in successive abstraction
-   * @param maxSuffixLength longest ending consulted
-   * @param openTags tags an unknown word may take, ascending
-   * @param logPrior the log prior each tag's probability is divided by, one per tag of the tag
-   *     set, for words not written with a capital (or in a state that does not say so)
-   * @param logPriorCapitalised the same for words in the state of words written with a capital
-   * @param baseDistribution tag distribution over all rare words, one per open tag, summing to 1
-   * @param trieOfShape index into {@code tries} for each {@link WordShape} ordinal
-   * @param tries ending counts, one trie per group of shapes
-   */
-  public UnknownWordModel(
+  private UnknownWordModel(
       double theta,
-      int maxSuffixLength,
+      int maxEndingLength,
       int[] openTags,
       double[] logPrior,
       double[] logPriorCapitalised,
       double[] baseDistribution,
       int[] trieOfShape,
-      SuffixTrie[] tries) {
-    this(theta, maxSuffixLength, openTags, logPrior, logPriorCapitalised, baseDistribution, trieOfShape, tries, null);
-  }
-
-  /**
-   * A model that also uses the lower-case form of capitalised words, where {@code lowerCaseForms}
-   * is not null; the other parameters as above.
-   */
-  public UnknownWordModel(
-      double theta,
-      int maxSuffixLength,
-      int[] openTags,
-      double[] logPrior,
-      double[] logPriorCapitalised,
-      double[] baseDistribution,
-      int[] trieOfShape,
-      SuffixTrie[] tries,
-      LowerCaseFormCue lowerCaseForms) {
-    this(theta, maxSuffixLength, openTags, logPrior, logPriorCapitalised, baseDistribution, trieOfShape, tries,
-        lowerCaseForms, 0, null);
-  }
-
-  /**
-   * A model that also weighs an unknown word by its beginning, where {@code maxPrefixLength} is
-   * positive: {@code prefixTries} holds two tries of word beginnings (see {@link
-   * #prefixTries()}); the other parameters as above.
-   */
-  public UnknownWordModel(
-      double theta,
-      int maxSuffixLength,
-      int[] openTags,
-      double[] logPrior,
-      double[] logPriorCapitalised,
-      double[] baseDistribution,
-      int[] trieOfShape,
-      SuffixTrie[] tries,
+      AffixTrie[] endingTries,
       LowerCaseFormCue lowerCaseForms,
-      int maxPrefixLength,
-      SuffixTrie[] prefixTries) {
-    if (maxPrefixLength < 0 || (maxPrefixLength > 0 && (prefixTries == null || prefixTries.length != 2))) {
+      int maxBeginningLength,
+      AffixTrie[] beginningTries) {
+    if (openTags == null || logPrior == null || baseDistribution == null || trieOfShape == null || endingTries == null) {
+      throw new IllegalArgumentException("an unknown-word model needs open tags, priors, a base distribution and ending tries");
+    }
+    if (maxBeginningLength < 0 || (maxBeginningLength > 0 && (beginningTries == null || beginningTries.length != 2))) {
       throw new IllegalArgumentException("a model of word beginnings needs two tries and a positive length: "
-          + maxPrefixLength);
+          + maxBeginningLength);
     }
     if (logPriorCapitalised.length != logPrior.length) {
       throw new IllegalArgumentException("one prior per tag expected for capitalised words as for the others");
@@ -158,7 +101,7 @@ public final class UnknownWordModel {
       throw new IllegalArgumentException("one trie index per word shape expected");
     }
     for (int t : trieOfShape) {
-      if (t < 0 || t >= tries.length) {
+      if (t < 0 || t >= endingTries.length) {
         throw new IllegalArgumentException("trie index out of range: " + t);
       }
     }
@@ -172,27 +115,27 @@ public final class UnknownWordModel {
       }
     }
     this.theta = theta;
-    this.maxSuffixLength = maxSuffixLength;
+    this.maxEndingLength = maxEndingLength;
     this.openTags = openTags.clone();
     this.logPrior = logPrior.clone();
     this.logPriorCapitalised = logPriorCapitalised.clone();
     this.baseDistribution = baseDistribution.clone();
     this.trieOfShape = trieOfShape.clone();
     this.lowerCaseForms = lowerCaseForms;
-    this.maxPrefixLength = maxPrefixLength;
-    this.prefixTries = maxPrefixLength > 0 ? prefixTries.clone() : null;
+    this.maxBeginningLength = maxBeginningLength;
+    this.beginningTries = maxBeginningLength > 0 ? beginningTries.clone() : null;
     int[] openOfTag = openIndexOfTags(this.openTags, logPrior.length);
-    this.openOfPrefixCount = maxPrefixLength > 0 ? new int[2][] : null;
-    for (int t = 0; maxPrefixLength > 0 && t < 2; t++) {
-      openOfPrefixCount[t] = openIndexes(prefixTries[t], openOfTag);
+    this.openOfBeginningCount = maxBeginningLength > 0 ? new int[2][] : null;
+    for (int t = 0; maxBeginningLength > 0 && t < 2; t++) {
+      openOfBeginningCount[t] = openIndexes(beginningTries[t], openOfTag);
     }
-    this.tries = tries.clone();
-    this.openOfCount = new int[tries.length][];
-    for (int t = 0; t < tries.length; t++) {
-      openOfCount[t] = openIndexes(tries[t], openOfTag);
+    this.endingTries = endingTries.clone();
+    this.openOfCount = new int[endingTries.length][];
+    for (int t = 0; t < endingTries.length; t++) {
+      openOfCount[t] = openIndexes(endingTries[t], openOfTag);
     }
-    this.endingDistribution = perNode(this.tries);
-    this.beginningFactors = maxPrefixLength > 0 ? perNode(this.prefixTries) : null;
+    this.endingDistribution = perNode(this.endingTries);
+    this.beginningFactors = maxBeginningLength > 0 ? perNode(this.beginningTries) : null;
   }
 
   /** Per tag of the tag set, its index among the open tags, or -1. */
@@ -206,7 +149,7 @@ public final class UnknownWordModel {
   }
 
   /** Per count entry of {@code trie}: the open index of its tag, or -1 for a closed tag (or one outside the tag set). */
-  private static int[] openIndexes(SuffixTrie trie, int[] openOfTag) {
+  private static int[] openIndexes(AffixTrie trie, int[] openOfTag) {
     int[] open = new int[trie.countTag.length];
     for (int i = 0; i < open.length; i++) {
       int tag = trie.countTag[i];
@@ -215,7 +158,7 @@ public final class UnknownWordModel {
     return open;
   }
 
-  private static double[][][] perNode(SuffixTrie[] tries) {
+  private static double[][][] perNode(AffixTrie[] tries) {
     double[][][] kept = new double[tries.length][][];
     for (int t = 0; t < tries.length; t++) {
       kept[t] = new double[tries[t].nodeCount()][];
@@ -244,7 +187,7 @@ public final class UnknownWordModel {
    * @return length of the longest ending that was found in the counts
    */
   public int logEmissions(char[] buf, int off, int len, double[] scratch, double[] out) {
-    return logEmissions(buf, off, len, startsWithCapital(buf, off, len), scratch, out);
+    return logEmissions(buf, off, len, Spelling.startsWithCapital(buf, off, len), scratch, out);
   }
 
   /**
@@ -263,7 +206,7 @@ public final class UnknownWordModel {
     if (lowerCaseForms != null) {
       lowerCaseForms.addLogFactors(shape, buf, off, len, out);
     }
-    if (prefixTries != null) {
+    if (beginningTries != null) {
       double[] logFactors = logBeginningFactors(shape, buf, off, len);
       for (int k = 0; k < openTags.length; k++) {
         out[k] += logFactors[k];
@@ -284,16 +227,16 @@ public final class UnknownWordModel {
    */
   private int logEndingDistribution(WordShape shape, char[] buf, int off, int len, double[] scratch, double[] out) {
     int t = trieOfShape[shape.ordinal()];
-    SuffixTrie trie = tries[t];
+    AffixTrie trie = endingTries[t];
     int node = 0;
     int depth = 0;
-    for (int next; depth < Math.min(len, maxSuffixLength) && (next = trie.child(node, buf[off + len - 1 - depth])) >= 0; depth++) {
+    for (int next; depth < Math.min(len, maxEndingLength) && (next = trie.child(node, buf[off + len - 1 - depth])) >= 0; depth++) {
       node = next;
     }
     double[] kept = (double[]) NODE.getAcquire(endingDistribution[t], node);
     if (kept == null) {
       kept = new double[openTags.length];
-      tagDistribution(buf, off, len, theta, null, scratch, kept);
+      tagDistribution(buf, off, len, theta, scratch, kept);
       for (int k = 0; k < kept.length; k++) {
         kept[k] = Math.log(kept[k]);
       }
@@ -304,61 +247,115 @@ public final class UnknownWordModel {
   }
 
   /**
-   * The logarithm of {@link #prefixFactor} of every open tag for the word, kept per node of the
+   * The logarithm of {@link #beginningFactor} of every open tag for the word, kept per node of the
    * beginning trie: the factor depends only on the deepest node the word's beginning reaches,
    * since abstraction along the path stops where a node holds no count of an open tag, and so
    * do all nodes below it.
    */
   private double[] logBeginningFactors(WordShape shape, char[] buf, int off, int len) {
     int group = shape.capitalisationOnly() == WordShape.CAPITALISED ? 1 : 0;
-    SuffixTrie trie = prefixTries[group];
+    AffixTrie trie = beginningTries[group];
     int node = 0;
-    for (int depth = 0, next; depth < Math.min(len, maxPrefixLength)
-        && (next = trie.child(node, Character.toLowerCase(buf[off + depth]))) >= 0; depth++) {
+    for (int depth = 0, next; depth < Math.min(len, maxBeginningLength)
+        && (next = trie.child(node, Spelling.lowerCase(buf[off + depth]))) >= 0; depth++) {
       node = next;
     }
     double[] kept = (double[]) NODE.getAcquire(beginningFactors[group], node);
     if (kept == null) {
       kept = new double[openTags.length];
       for (int k = 0; k < kept.length; k++) {
-        kept[k] = Math.log(prefixFactor(buf, off, len, k));
+        kept[k] = Math.log(beginningFactor(buf, off, len, k));
       }
       NODE.setRelease(beginningFactors[group], node, kept);
     }
     return kept;
   }
 
-  private static boolean startsWithCapital(char[] buf, int off, int len) {
-    return len > 0 && (Character.isUpperCase(buf[off]) || Character.isTitleCase(buf[off]));
-  }
-
   /**
    * Writes {@code P(openTag(k) | ending, shape)} into {@code out[k]}, by successive abstraction
-   * with weight {@code weight}. With {@code heldOut} (counts per open tag) those counts are taken
-   * out of every ending on the word's path first, which scores a training word as if it had
-   * not been seen: the leave-one-out estimate used to choose θ.
+   * with weight {@code weight}: from the distribution over all rare words, through the root of
+   * the shape's trie (all rare words of the shape), to the longest ending that was counted.
    *
    * @return length of the longest ending that was found in the counts
    */
-  public int tagDistribution(char[] buf, int off, int len, double weight, long[] heldOut, double[] scratch, double[] out) {
+  public int tagDistribution(char[] buf, int off, int len, double weight, double[] scratch, double[] out) {
     int t = trieOfShape[WordShape.classify(buf, off, len).ordinal()];
-    SuffixTrie trie = tries[t];
+    AffixTrie trie = endingTries[t];
     int[] openOf = openOfCount[t];
     // the shape's own distribution, abstracted to the one over all rare words
     System.arraycopy(baseDistribution, 0, out, 0, openTags.length);
-    abstractTo(trie, openOf, 0, weight, heldOut, out, scratch);
+    openCounts(trie, openOf, 0, scratch);
+    abstractTo(scratch, openTags.length, weight, out);
     int node = 0;
     int depth = 0;
-    while (depth < Math.min(len, maxSuffixLength)) {
+    while (depth < Math.min(len, maxEndingLength)) {
       int next = trie.child(node, buf[off + len - 1 - depth]);
       if (next < 0) {
         break;
       }
       node = next;
       depth++;
-      abstractTo(trie, openOf, node, weight, heldOut, out, scratch);
+      openCounts(trie, openOf, node, scratch);
+      abstractTo(scratch, openTags.length, weight, out);
     }
     return depth;
+  }
+
+  /**
+   * The nodes of the word's ending trie that {@link #tagDistribution} abstracts through, root
+   * first, into {@code nodes} (at least {@link #maxEndingLength()} + 1 long): a read-only view for
+   * training code that scores a word with some counts taken out (leave-one-out).
+   *
+   * @return the number of nodes written, the length of the longest counted ending plus one
+   */
+  public int endingPath(char[] buf, int off, int len, int[] nodes) {
+    AffixTrie trie = endingTries[trieOfShape[WordShape.classify(buf, off, len).ordinal()]];
+    int count = 0;
+    nodes[count++] = 0;
+    for (int node = 0, next; count - 1 < Math.min(len, maxEndingLength)
+        && (next = trie.child(node, buf[off + len - count])) >= 0; node = next) {
+      nodes[count++] = next;
+    }
+    return count;
+  }
+
+  /** Writes the counts of each open tag at {@code node} of the word's ending trie into {@code out}. */
+  public void openCountsAt(char[] buf, int off, int len, int node, double[] out) {
+    int t = trieOfShape[WordShape.classify(buf, off, len).ordinal()];
+    openCounts(endingTries[t], openOfCount[t], node, out);
+  }
+
+  /** The share of open tag {@code k} among all rare training words, where abstraction starts. */
+  public double baseProbability(int k) {
+    return baseDistribution[k];
+  }
+
+  private void openCounts(AffixTrie trie, int[] openOf, int node, double[] out) {
+    Arrays.fill(out, 0, openTags.length, 0.0);
+    for (int i = trie.countStart[node], end = trie.countStart[node + 1]; i < end; i++) {
+      int open = openOf[i];
+      if (open >= 0) {
+        out[open] = trie.countValue[i];
+      }
+    }
+  }
+
+  /**
+   * One step of successive abstraction over the first {@code n} entries: {@code dist := (counts /
+   * Σ counts + weight dist) / (1 + weight)}; nothing where the counts are all zero.
+   */
+  public static void abstractTo(double[] counts, int n, double weight, double[] dist) {
+    double counted = 0;
+    for (int i = 0; i < n; i++) {
+      counted += counts[i];
+    }
+    if (counted == 0) {
+      return;
+    }
+    double norm = 1.0 / (1.0 + weight);
+    for (int i = 0; i < n; i++) {
+      dist[i] = (counts[i] / counted + weight * dist[i]) * norm;
+    }
   }
 
   /**
@@ -368,10 +365,10 @@ public final class UnknownWordModel {
    * capitalisation, the divisor) to the longest beginning that was counted. One open tag at a
    * time, so that it needs no buffer: the path is short and its nodes hold few counts.
    */
-  double prefixFactor(char[] buf, int off, int len, int k) {
+  double beginningFactor(char[] buf, int off, int len, int k) {
     int group = WordShape.classify(buf, off, len).capitalisationOnly() == WordShape.CAPITALISED ? 1 : 0;
-    SuffixTrie trie = prefixTries[group];
-    int[] openOf = openOfPrefixCount[group];
+    AffixTrie trie = beginningTries[group];
+    int[] openOf = openOfBeginningCount[group];
     double dist = baseDistribution[k];
     double root = Double.NaN;
     int node = 0;
@@ -393,10 +390,10 @@ public final class UnknownWordModel {
         root = (own + 1.0) / (counted + 1.0 * openTags.length);
       }
       dist = (own / counted + theta * dist) / (1 + theta);
-      if (depth == Math.min(len, maxPrefixLength)) {
+      if (depth == Math.min(len, maxBeginningLength)) {
         break;
       }
-      node = trie.child(node, Character.toLowerCase(buf[off + depth]));
+      node = trie.child(node, Spelling.lowerCase(buf[off + depth]));
       if (node < 0) {
         break;
       }
@@ -404,39 +401,12 @@ public final class UnknownWordModel {
     return Double.isNaN(root) ? 1 : dist / root;
   }
 
-  /** dist := (P^(t | node) + θ dist) / (1 + θ), over open tags. */
-  private void abstractTo(SuffixTrie trie, int[] openOf, int node, double weight, long[] heldOut, double[] dist,
-      double[] scratch) {
-    int k = openTags.length;
-    Arrays.fill(scratch, 0, k, 0.0);
-    for (int i = trie.countStart[node], end = trie.countStart[node + 1]; i < end; i++) {
-      int open = openOf[i];
-      if (open >= 0) {
-        scratch[open] = trie.countValue[i];
-      }
-    }
-    double counted = 0;
-    for (int i = 0; i < k; i++) {
-      if (heldOut != null) {
-        scratch[i] = Math.max(0, scratch[i] - heldOut[i]);
-      }
-      counted += scratch[i];
-    }
-    if (counted == 0) {
-      return;
-    }
-    double norm = 1.0 / (1.0 + weight);
-    for (int i = 0; i < k; i++) {
-      dist[i] = (scratch[i] / counted + weight * dist[i]) * norm;
-    }
-  }
-
   public double theta() {
     return theta;
   }
 
-  public int maxSuffixLength() {
-    return maxSuffixLength;
+  public int maxEndingLength() {
+    return maxEndingLength;
   }
 
   int[] openTags() {
@@ -479,13 +449,13 @@ public final class UnknownWordModel {
     return trieOfShape;
   }
 
-  SuffixTrie[] tries() {
-    return tries;
+  AffixTrie[] endingTries() {
+    return endingTries;
   }
 
   /** Longest word beginning consulted; 0 if the model does not look at beginnings. */
-  public int maxPrefixLength() {
-    return maxPrefixLength;
+  public int maxBeginningLength() {
+    return maxBeginningLength;
   }
 
   /**
@@ -494,8 +464,8 @@ public final class UnknownWordModel {
    * WordShape#ALL_CAPS}), tries of the rare training words lower-cased and reversed, so that a
    * trie's path from the root spells a beginning.
    */
-  public SuffixTrie[] prefixTries() {
-    return prefixTries == null ? null : prefixTries.clone();
+  public AffixTrie[] beginningTries() {
+    return beginningTries == null ? null : beginningTries.clone();
   }
 
   /** The cue of the lower-case forms of capitalised words, or null if the model has none. */
@@ -504,24 +474,122 @@ public final class UnknownWordModel {
   }
 
   /** The ending counts words of {@code shape} are scored with; shapes may share one. */
-  public SuffixTrie suffixTrie(WordShape shape) {
-    return tries[trieOfShape[shape.ordinal()]];
+  public AffixTrie endingTrie(WordShape shape) {
+    return endingTries[trieOfShape[shape.ordinal()]];
   }
 
   /** Approximate heap size in bytes. */
   public long ramBytesUsed() {
     long bytes = 16L * (openTags.length + 2L * logPrior.length);
-    for (SuffixTrie t : tries) {
+    for (AffixTrie t : endingTries) {
       bytes += 14L * t.nodeCount() + 10L * t.countTag.length;
     }
     if (lowerCaseForms != null) {
       bytes += lowerCaseForms.ramBytesUsed();
     }
-    if (prefixTries != null) {
-      for (SuffixTrie t : prefixTries) {
+    if (beginningTries != null) {
+      for (AffixTrie t : beginningTries) {
         bytes += 14L * t.nodeCount() + 10L * t.countTag.length;
       }
     }
     return bytes;
+  }
+
+  /** A builder with nothing set. */
+  public static Builder builder() {
+    return new Builder();
+  }
+
+  /** A builder holding this model's parts, to change some of them. */
+  public Builder toBuilder() {
+    return new Builder().theta(theta).endings(maxEndingLength, trieOfShape, endingTries).openTags(openTags, baseDistribution)
+        .logPriors(logPrior, logPriorCapitalised).lowerCaseForms(lowerCaseForms)
+        .beginnings(maxBeginningLength, beginningTries);
+  }
+
+  /**
+   * The parts of an unknown-word model, set by name; {@link #build} checks them together. Needed:
+   * {@link #theta}, {@link #openTags}, {@link #logPriors} and {@link #endings}; the cue of
+   * lower-case forms and the tries of word beginnings are optional.
+   */
+  public static final class Builder {
+    private double theta = Double.NaN;
+    private int maxEndingLength;
+    private int[] openTags;
+    private double[] logPrior;
+    private double[] logPriorCapitalised;
+    private double[] baseDistribution;
+    private int[] trieOfShape;
+    private AffixTrie[] endingTries;
+    private LowerCaseFormCue lowerCaseForms;
+    private int maxBeginningLength;
+    private AffixTrie[] beginningTries;
+
+    private Builder() {}
+
+    /** Weight of the shorter ending in successive abstraction; finite and positive. */
+    public Builder theta(double weight) {
+      this.theta = weight;
+      return this;
+    }
+
+    /**
+     * The tags an unknown word may take, ascending, with their distribution over all rare words
+     * (one per open tag, summing to 1).
+     */
+    public Builder openTags(int[] tags, double[] distribution) {
+      this.openTags = tags;
+      this.baseDistribution = distribution;
+      return this;
+    }
+
+    /**
+     * The log prior each tag's probability is divided by, one per tag of the tag set: for words
+     * not written with a capital (or in a state that does not say so), and for words in the
+     * state of words written with a capital.
+     */
+    public Builder logPriors(double[] plain, double[] capitalised) {
+      this.logPrior = plain;
+      this.logPriorCapitalised = capitalised;
+      return this;
+    }
+
+    /** One log prior for every word, as in a model without capitalisation states. */
+    public Builder logPrior(double[] prior) {
+      return logPriors(prior, prior);
+    }
+
+    /**
+     * The ending counts: one trie per group of shapes, {@code trieOfShape} giving the trie of each
+     * {@link WordShape} ordinal, consulted up to {@code maxLength} characters.
+     */
+    public Builder endings(int maxLength, int[] trieOfShape, AffixTrie[] tries) {
+      this.maxEndingLength = maxLength;
+      this.trieOfShape = trieOfShape;
+      this.endingTries = tries;
+      return this;
+    }
+
+    /** The cue of the lower-case forms of capitalised words; null for none. */
+    public Builder lowerCaseForms(LowerCaseFormCue cue) {
+      this.lowerCaseForms = cue;
+      return this;
+    }
+
+    /**
+     * Two tries of word beginnings, for words not written with a capital and for the others
+     * (see {@link #beginningTries()}), consulted up to {@code maxLength} characters; 0 and null
+     * for none.
+     */
+    public Builder beginnings(int maxLength, AffixTrie[] tries) {
+      this.maxBeginningLength = maxLength;
+      this.beginningTries = tries;
+      return this;
+    }
+
+    /** @throws IllegalArgumentException if the parts do not make a model together */
+    public UnknownWordModel build() {
+      return new UnknownWordModel(this);
+    }
   }
 }

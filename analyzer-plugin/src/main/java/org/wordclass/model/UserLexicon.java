@@ -14,7 +14,6 @@ import java.util.Arrays;
 import java.util.HashMap;
 import java.util.LinkedHashSet;
 import java.util.List;
-import java.util.Locale;
 import java.util.Map;
 import java.util.Set;
 import java.util.TreeMap;
@@ -69,21 +68,11 @@ public final class UserLexicon {
       Set<String> forms = new LinkedHashSet<>();
       forms.add(word);
       if (anyCase) {
-        String lower = word.toLowerCase(Locale.ROOT);
-        forms.add(lower);
-        forms.add(capitalised(lower));
-        forms.add(word.toUpperCase(Locale.ROOT));
+        forms.add(Spelling.lowerCase(word));
+        forms.add(Spelling.capitalised(word));
+        forms.add(Spelling.upperCase(word));
       }
       return forms;
-    }
-
-    private static String capitalised(String lower) {
-      if (lower.isEmpty()) {
-        return lower;
-      }
-      int first = lower.codePointAt(0);
-      return new StringBuilder().appendCodePoint(Character.toTitleCase(first))
-          .append(lower, Character.charCount(first), lower.length()).toString();
     }
   }
 
@@ -158,7 +147,7 @@ public final class UserLexicon {
         .onMalformedInput(CodingErrorAction.REPORT)
         .onUnmappableCharacter(CodingErrorAction.REPORT);
     private final List<Entry> entries = new ArrayList<>();
-    /** Line of each exactly written word, and of each case=any word by its lower-case form. */
+    /** Line of each exactly written word, and of each written form of a case=any word. */
     private final Map<String, Integer> exactLines = new HashMap<>();
     private final Map<String, Integer> anyCaseLines = new HashMap<>();
 
@@ -266,14 +255,21 @@ public final class UserLexicon {
       throw error(line, "the weight of " + className + " must be a positive number, not '" + text + "'");
     }
 
-    /** Exact entries may not repeat a word; case=any entries may not repeat one in any case. */
+    /**
+     * Exact entries may not repeat a word; case=any entries may not share a written form, which
+     * catches a word listed twice in different cases whichever case each was written in.
+     */
     private void checkNotListedBefore(Entry entry) throws LexiconFormatException {
       Map<String, Integer> seen = entry.anyCase() ? anyCaseLines : exactLines;
-      String key = entry.anyCase() ? entry.word().toLowerCase(Locale.ROOT) : entry.word();
-      Integer first = seen.putIfAbsent(key, entry.line());
-      if (first != null) {
-        throw error(entry.line(), "'" + entry.word() + "' is listed twice" + (entry.anyCase() ? " in any case" : "")
-            + " (first on line " + first + ")");
+      for (String form : entry.anyCase() ? entry.forms() : Set.of(entry.word())) {
+        Integer first = seen.get(form);
+        if (first != null) {
+          throw error(entry.line(), "'" + entry.word() + "' is listed twice" + (entry.anyCase() ? " in any case" : "")
+              + " (first on line " + first + ")");
+        }
+      }
+      for (String form : entry.anyCase() ? entry.forms() : Set.of(entry.word())) {
+        seen.put(form, entry.line());
       }
     }
 

@@ -37,7 +37,7 @@ public enum WordShape {
       }
       if (Character.isLetter(c)) {
         if (letters == 0) {
-          firstLetterUpper = Character.isUpperCase(c) || Character.isTitleCase(c);
+          firstLetterUpper = Spelling.isCapital(c);
         }
         letters++;
         if (Character.isUpperCase(c)) {

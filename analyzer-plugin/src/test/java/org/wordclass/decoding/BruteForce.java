@@ -42,11 +42,11 @@ final class BruteForce {
     Lexicon lexicon = model.lexicon();
     int word = lexicon.lookup(token);
     if (word >= 0) {
-      int n = lexicon.tagCount(word);
+      int n = lexicon.stateCount(word);
       tags[i] = new int[n];
       logEmissions[i] = new double[n];
       for (int k = 0; k < n; k++) {
-        tags[i][k] = lexicon.tag(word, k);
+        tags[i][k] = lexicon.state(word, k);
         logEmissions[i][k] = lexicon.logEmission(word, k);
       }
     } else {

@@ -197,11 +197,10 @@ class BundledModelDecodingTest {
   /** The lexicon holds states; each stands for one tag. */
   private static Set<Integer> lexiconTags(int word) {
     Lexicon lexicon = MODEL.lexicon();
-    return IntStream.range(0, lexicon.tagCount(word))
-        .mapToObj(k -> MODEL.states().tagOf(lexicon.tag(word, k))).collect(Collectors.toSet());
+    return IntStream.range(0, lexicon.stateCount(word))
+        .mapToObj(k -> MODEL.states().tagOf(lexicon.state(word, k))).collect(Collectors.toSet());
   }
 
-  /** An unknown capitalised first word is looked up in lower case when the model asks for it. */
   /**
    * A capitalised first word is looked up in lower case if it is unknown, or (docs/model-format.md,
    * field 8c, bit 1) known only in states of words capitalised in mid-sentence; it keeps its own
@@ -210,8 +209,8 @@ class BundledModelDecodingTest {
   private static int lookupAsTheLatticeDoes(String token, int position) {
     int word = MODEL.lexicon().lookup(token);
     boolean lowerCase = word < 0 ? MODEL.cues().lowercaseFirstWord()
-        : MODEL.cues().lowercaseMidSentenceFirstWord() && IntStream.range(0, MODEL.lexicon().tagCount(word))
-            .allMatch(k -> MODEL.states().flags(MODEL.lexicon().tag(word, k)) == StateSpace.CAPITALISED);
+        : MODEL.cues().lowercaseMidSentenceFirstWord() && IntStream.range(0, MODEL.lexicon().stateCount(word))
+            .allMatch(k -> MODEL.states().flags(MODEL.lexicon().state(word, k)) == StateSpace.CAPITALISED);
     if (lowerCase && position == 0 && Character.isUpperCase(token.charAt(0))) {
       int lower = MODEL.lexicon().lookup(token.toLowerCase(java.util.Locale.ROOT));
       return lower >= 0 ? lower : word;

@@ -61,10 +61,10 @@ class DocumentedLayoutTest {
     assertEquals(lexicon.size(), vint());
     for (Lexicon.Entry e : lexicon.entries()) {
       assertEquals(e.word(), string());
-      assertEquals(e.tags().length, vint());
+      assertEquals(e.states().length, vint());
       assertEquals(e.hasContexts() ? 1 : 0, in.get());
-      for (int k = 0; k < e.tags().length; k++) {
-        assertEquals(e.tags()[k], vint());
+      for (int k = 0; k < e.states().length; k++) {
+        assertEquals(e.states()[k], vint());
         assertEquals(e.logEmissions()[k], Float.intBitsToFloat(in.getInt()));
         if (e.hasContexts()) {
           assertEquals(e.contextStates()[k].length, vint());
@@ -79,7 +79,7 @@ class DocumentedLayoutTest {
 
   private void unknownWords(UnknownWordModel u) {
     assertEquals(u.theta(), in.getDouble());
-    assertEquals(u.maxSuffixLength(), vint());
+    assertEquals(u.maxEndingLength(), vint());
     assertEquals(u.openTagCount(), vint());
     for (int t : u.openTags()) {
       assertEquals(t, vint());
@@ -90,8 +90,8 @@ class DocumentedLayoutTest {
     for (int t : u.trieOfShape()) {
       assertEquals(t, vint());
     }
-    assertEquals(u.tries().length, vint());
-    for (SuffixTrie trie : u.tries()) {
+    assertEquals(u.endingTries().length, vint());
+    for (AffixTrie trie : u.endingTries()) {
       trie(trie);
     }
     LowerCaseFormCue cue = u.lowerCaseForms();
@@ -100,16 +100,16 @@ class DocumentedLayoutTest {
       assertArrayEquals(cue.logStatePrior(), doubles(model.states().size()));
       assertArrayEquals(cue.factors(), doubles(model.tags().size() * u.openTagCount()));
     }
-    assertEquals(u.maxPrefixLength(), vint());
-    if (u.maxPrefixLength() > 0) {
-      for (SuffixTrie trie : u.prefixTries()) {
+    assertEquals(u.maxBeginningLength(), vint());
+    if (u.maxBeginningLength() > 0) {
+      for (AffixTrie trie : u.beginningTries()) {
         trie(trie);
       }
     }
   }
 
   /** Breadth-first nodes: counts, then child characters; edge e leads to node e + 1. */
-  private void trie(SuffixTrie trie) {
+  private void trie(AffixTrie trie) {
     int nodes = vint();
     assertEquals(trie.nodeCount(), nodes);
     int edges = 0;

@@ -29,13 +29,13 @@ class LexiconOverlayTest {
 
   private static int[] states(HmmModel model, String word) {
     int w = model.lexicon().lookup(word);
-    return IntStream.range(0, model.lexicon().tagCount(w)).map(k -> model.lexicon().tag(w, k)).toArray();
+    return IntStream.range(0, model.lexicon().stateCount(w)).map(k -> model.lexicon().state(w, k)).toArray();
   }
 
   private static float emission(HmmModel model, String word, int state) {
     int w = model.lexicon().lookup(word);
-    for (int k = 0; k < model.lexicon().tagCount(w); k++) {
-      if (model.lexicon().tag(w, k) == state) {
+    for (int k = 0; k < model.lexicon().stateCount(w); k++) {
+      if (model.lexicon().state(w, k) == state) {
         return model.lexicon().logEmission(w, k);
       }
     }
@@ -123,8 +123,8 @@ class LexiconOverlayTest {
     assertTrue(space.statesOf(noun).length > 1, "the bundled model splits classes by capitalisation");
     int before = bundled.lexicon().lookup("cook");
     int after = fixed.lexicon().lookup("cook");
-    for (int k = 0; k < bundled.lexicon().tagCount(before); k++) {
-      int state = bundled.lexicon().tag(before, k);
+    for (int k = 0; k < bundled.lexicon().stateCount(before); k++) {
+      int state = bundled.lexicon().state(before, k);
       assertEquals(bundled.lexicon().logEmission(before, k), emission(fixed, "cook", state));
       int kAfter = Arrays.binarySearch(states(fixed, "cook"), state);
       for (int previous = 0; previous <= bundled.boundary(); previous++) {

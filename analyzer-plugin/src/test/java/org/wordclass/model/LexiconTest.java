@@ -2,6 +2,7 @@ package org.wordclass.model;
 
 import static org.junit.jupiter.api.Assertions.assertArrayEquals;
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
@@ -54,10 +55,21 @@ class LexiconTest {
   }
 
   @Test
+  void theSameTableFindsTheLowerCaseFormOfAToken() {
+    char[] buf = "xxRUN THE ZÜRICH".toCharArray();
+    assertEquals(SMALL.lookup("run"), SMALL.lookupLowerCased(buf, 2, 3));
+    assertEquals(SMALL.lookup("the"), SMALL.lookupLowerCased(buf, 6, 3));
+    // the lower-case form of ZÜRICH is zürich, which the lexicon does not hold: Zürich is not it
+    assertEquals(-1, SMALL.lookupLowerCased(buf, 10, 6));
+    assertTrue(SMALL.isLowerCase(SMALL.lookup("run")));
+    assertFalse(SMALL.isLowerCase(SMALL.lookup("Zürich")));
+  }
+
+  @Test
   void tagsAndEmissionsAreKeptPerWord() {
     int run = SMALL.lookup("run");
-    assertEquals(2, SMALL.tagCount(run));
-    assertEquals(2, SMALL.tag(run, 1));
+    assertEquals(2, SMALL.stateCount(run));
+    assertEquals(2, SMALL.state(run, 1));
     assertEquals(-2.5f, SMALL.logEmission(run, 1));
     assertEquals(5, SMALL.pairCount());
     assertEquals("Zürich", SMALL.word(SMALL.lookup("Zürich")));
@@ -130,7 +142,7 @@ class LexiconTest {
   void entriesComeBackInIdOrder() {
     List<Lexicon.Entry> back = SMALL.entries();
     assertEquals(List.of("run", "the", "Zürich", "a"), back.stream().map(Lexicon.Entry::word).toList());
-    assertArrayEquals(new int[] {1, 2}, back.get(0).tags());
+    assertArrayEquals(new int[] {1, 2}, back.get(0).states());
     assertArrayEquals(new float[] {-1.5f, -2.5f}, back.get(0).logEmissions());
   }
 }

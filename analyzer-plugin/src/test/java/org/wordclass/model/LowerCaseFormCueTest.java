@@ -64,16 +64,16 @@ class LowerCaseFormCueTest {
 
   @Test
   void theFactorsReachTheEmissions() {
-    SuffixTrie.Builder trie = new SuffixTrie.Builder();
+    AffixTrie.Builder trie = new AffixTrie.Builder();
     trie.add("Walker", 1, 3, 4);
     trie.add("Baker", 2, 1, 4);
     double[] logPrior = {Math.log(0.2), Math.log(0.5), Math.log(0.3)};
     int[] open = {1, 2};
     int[] shapes = new int[WordShape.values().length];
-    SuffixTrie[] tries = {trie.build()};
-    UnknownWordModel plain = new UnknownWordModel(1.0, 4, open, logPrior, logPrior, new double[] {0.5, 0.5}, shapes, tries);
-    UnknownWordModel weighed = new UnknownWordModel(1.0, 4, open, logPrior, logPrior, new double[] {0.5, 0.5}, shapes,
-        tries, cue());
+    AffixTrie[] tries = {trie.build()};
+    UnknownWordModel plain = UnknownWordModel.builder().theta(1.0).openTags(open, new double[] {0.5, 0.5})
+        .logPrior(logPrior).endings(4, shapes, tries).build();
+    UnknownWordModel weighed = plain.toBuilder().lowerCaseForms(cue()).build();
     for (String word : new String[] {"Customer", "GREEN", "Paris", "Bakery"}) {
       double[] a = emissions(plain, word);
       double[] b = emissions(weighed, word);

@@ -173,7 +173,7 @@ class ModelFileForeignTest {
       out.writeVInt(1); // one trie
       out.writeVInt(Integer.MAX_VALUE); // its nodes
     });
-    assertFastRefusal(bytes, "declares 2147483647 suffix nodes but only ");
+    assertFastRefusal(bytes, "declares 2147483647 trie nodes but only ");
   }
 
   @Test

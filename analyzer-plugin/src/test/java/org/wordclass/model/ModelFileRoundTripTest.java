@@ -72,8 +72,8 @@ class ModelFileRoundTripTest {
   void versionOneFileIsReadWithOnePriorForEveryWord() throws IOException {
     HmmModel small = TestModels.small();
     UnknownWordModel u = small.unknownWords();
-    UnknownWordModel onePrior = new UnknownWordModel(u.theta(), u.maxSuffixLength(), u.openTags(), u.logPrior(),
-        u.baseDistribution(), u.trieOfShape(), u.tries());
+    UnknownWordModel onePrior = UnknownWordModel.builder().theta(u.theta()).openTags(u.openTags(), u.baseDistribution())
+        .logPrior(u.logPrior()).endings(u.maxEndingLength(), u.trieOfShape(), u.endingTries()).build();
     HmmModel model = new HmmModel(small.order(), small.tags(), small.states(), small.cues(), small.logBigramTable(),
         small.logTrigramTable(), small.lexicon(), onePrior, small.provenance());
     byte[] current = TestModels.bytes(model);
@@ -187,7 +187,7 @@ class ModelFileRoundTripTest {
       Lexicon.Entry e = expectedEntries.get(w);
       Lexicon.Entry a = actualEntries.get(w);
       assertEquals(e.word(), a.word());
-      assertArrayEquals(e.tags(), a.tags(), e.word());
+      assertArrayEquals(e.states(), a.states(), e.word());
       assertArrayEquals(e.logEmissions(), a.logEmissions(), e.word());
       assertEquals(w, actual.lookup(e.word()), e.word());
     }
@@ -195,13 +195,13 @@ class ModelFileRoundTripTest {
 
   private static void assertSameUnknownWords(UnknownWordModel expected, UnknownWordModel actual) {
     assertEquals(expected.theta(), actual.theta());
-    assertEquals(expected.maxSuffixLength(), actual.maxSuffixLength());
+    assertEquals(expected.maxEndingLength(), actual.maxEndingLength());
     assertArrayEquals(expected.openTags(), actual.openTags());
     assertArrayEquals(expected.logPrior(), actual.logPrior());
     assertArrayEquals(expected.logPriorCapitalised(), actual.logPriorCapitalised());
-    assertEquals(expected.maxPrefixLength(), actual.maxPrefixLength());
-    for (int i = 0; expected.maxPrefixLength() > 0 && i < 2; i++) {
-      assertSameTrie(expected.prefixTries()[i], actual.prefixTries()[i]);
+    assertEquals(expected.maxBeginningLength(), actual.maxBeginningLength());
+    for (int i = 0; expected.maxBeginningLength() > 0 && i < 2; i++) {
+      assertSameTrie(expected.beginningTries()[i], actual.beginningTries()[i]);
     }
     assertEquals(expected.lowerCaseForms() == null, actual.lowerCaseForms() == null);
     if (expected.lowerCaseForms() != null) {
@@ -211,16 +211,16 @@ class ModelFileRoundTripTest {
     }
     assertArrayEquals(expected.baseDistribution(), actual.baseDistribution());
     assertArrayEquals(expected.trieOfShape(), actual.trieOfShape());
-    assertEquals(expected.tries().length, actual.tries().length);
-    for (int i = 0; i < expected.tries().length; i++) {
-      assertSameTrie(expected.tries()[i], actual.tries()[i]);
+    assertEquals(expected.endingTries().length, actual.endingTries().length);
+    for (int i = 0; i < expected.endingTries().length; i++) {
+      assertSameTrie(expected.endingTries()[i], actual.endingTries()[i]);
     }
     for (String word : PROBES) {
       assertArrayEquals(scores(expected, word), scores(actual, word), "unknown-word scores of '" + word + "'");
     }
   }
 
-  private static void assertSameTrie(SuffixTrie expected, SuffixTrie actual) {
+  private static void assertSameTrie(AffixTrie expected, AffixTrie actual) {
     assertArrayEquals(expected.childStart, actual.childStart);
     assertArrayEquals(expected.childChar, actual.childChar);
     assertArrayEquals(expected.countStart, actual.countStart);

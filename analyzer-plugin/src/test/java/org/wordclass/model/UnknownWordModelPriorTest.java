@@ -17,12 +17,12 @@ class UnknownWordModelPriorTest {
   private static final double[] CAPITALISED = {Math.log(0.1), Math.log(0.6), Math.log(0.3)};
 
   private static UnknownWordModel model(double[] capitalised) {
-    SuffixTrie.Builder trie = new SuffixTrie.Builder();
+    AffixTrie.Builder trie = new AffixTrie.Builder();
     trie.add("walked", 2, 3, 4);
     trie.add("table", 1, 4, 4);
     trie.add("Bern", 1, 5, 4);
-    return new UnknownWordModel(1.0, 4, new int[] {1, 2}, LOWER, capitalised, new double[] {0.5, 0.5},
-        new int[WordShape.values().length], new SuffixTrie[] {trie.build()});
+    return UnknownWordModel.builder().theta(1.0).openTags(new int[] {1, 2}, new double[] {0.5, 0.5})
+        .logPriors(LOWER, capitalised).endings(4, new int[WordShape.values().length], new AffixTrie[] {trie.build()}).build();
   }
 
   private static double[] scores(UnknownWordModel m, String word) {
@@ -39,7 +39,7 @@ class UnknownWordModelPriorTest {
 
   private static double[] distribution(UnknownWordModel m, String word) {
     double[] out = new double[m.openTagCount()];
-    m.tagDistribution(word.toCharArray(), 0, word.length(), m.theta(), null, new double[m.openTagCount()], out);
+    m.tagDistribution(word.toCharArray(), 0, word.length(), m.theta(), new double[m.openTagCount()], out);
     return out;
   }
 
@@ -90,8 +90,9 @@ class UnknownWordModelPriorTest {
 
   @Test
   void onePriorForBothIsThePlainDivision() {
-    UnknownWordModel plain = new UnknownWordModel(1.0, 4, new int[] {1, 2}, LOWER, new double[] {0.5, 0.5},
-        new int[WordShape.values().length], new SuffixTrie[] {new SuffixTrie.Builder().build()});
+    UnknownWordModel plain = UnknownWordModel.builder().theta(1.0).openTags(new int[] {1, 2}, new double[] {0.5, 0.5})
+        .logPrior(LOWER).endings(4, new int[WordShape.values().length], new AffixTrie[] {new AffixTrie.Builder().build()})
+        .build();
     assertFalse(plain.hasCapitalisedPriors());
     assertEquals(plain.logPrior(1), plain.logPriorCapitalised(1));
   }

@@ -43,12 +43,12 @@ class UnknownWordModelTest {
     int k = model.openTagCount();
     char[] chars = word.toCharArray();
     double[] expected = new double[k];
-    int expectedDepth = model.tagDistribution(chars, 0, chars.length, model.theta(), null, new double[k], expected);
+    int expectedDepth = model.tagDistribution(chars, 0, chars.length, model.theta(), new double[k], expected);
     if (model.lowerCaseForms() != null) {
       model.lowerCaseForms().apply(chars, 0, chars.length, expected);
     }
-    for (int i = 0; i < k && model.maxPrefixLength() > 0; i++) {
-      expected[i] *= model.prefixFactor(chars, 0, chars.length, i);
+    for (int i = 0; i < k && model.maxBeginningLength() > 0; i++) {
+      expected[i] *= model.beginningFactor(chars, 0, chars.length, i);
     }
     boolean capitalised = !word.isEmpty() && Character.isUpperCase(word.charAt(0));
     double[] actual = new double[k];

@@ -118,6 +118,17 @@ class UserLexiconTest {
     assertEquals("kitchen.txt:3: 'cook' is listed twice (first on line 1)", refusal("cook NOUN\nzest VERB\ncook VERB\n"));
     assertEquals("kitchen.txt:2: 'ZEST' is listed twice in any case (first on line 1)",
         refusal("zest VERB case=any\nZEST NOUN case=any\n"));
+    // lower-cased char by char (Spelling), ΟΔΟΣ and οδος have different lower-case forms but
+    // share the written form ΟΔΟΣ; final sigma from Unicode's SpecialCasing.txt, from memory
+    assertEquals("kitchen.txt:2: 'οδος' is listed twice in any case (first on line 1)",
+        refusal("ΟΔΟΣ NOUN case=any\nοδος NOUN case=any\n"));
+  }
+
+  @Test
+  void caseAnyFormsAreLowerCasedCharByChar() throws Exception {
+    // the dotted capital I lower-cases to a plain i (UnicodeData.txt simple mapping, from
+    // memory), as the decoder lower-cases a first word: not to i with a combining dot
+    assertEquals(Set.of("İzmir", "izmir", "Izmir", "İZMIR"), parse("İzmir NOUN case=any").entries().get(0).forms());
   }
 
   @Test

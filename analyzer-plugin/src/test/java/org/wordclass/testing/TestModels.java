@@ -17,7 +17,7 @@ import org.wordclass.model.Lexicon;
 import org.wordclass.model.LowerCaseFormCue;
 import org.wordclass.model.ModelFile;
 import org.wordclass.model.StateSpace;
-import org.wordclass.model.SuffixTrie;
+import org.wordclass.model.AffixTrie;
 import org.wordclass.model.TagSet;
 import org.wordclass.model.UnknownWordModel;
 import org.wordclass.model.WordShape;
@@ -113,11 +113,11 @@ public final class TestModels {
     int[] open = randomSubset(rnd, tagCount);
     double[] prior = randomDistribution(rnd, tagCount, 0);
     double[] logPrior = Arrays.stream(prior).map(Math::log).toArray();
-    SuffixTrie.Builder trie = new SuffixTrie.Builder();
+    AffixTrie.Builder trie = new AffixTrie.Builder();
     trie.add("zzq", open[rnd.nextInt(open.length)], 1 + rnd.nextInt(5), 3);
     trie.add("xyz", open[rnd.nextInt(open.length)], 1 + rnd.nextInt(5), 3);
-    return new UnknownWordModel(1.0, 3, open, logPrior, randomDistribution(rnd, open.length, 0),
-        new int[WordShape.values().length], new SuffixTrie[] {trie.build()});
+    return UnknownWordModel.builder().theta(1.0).openTags(open, randomDistribution(rnd, open.length, 0)).logPrior(logPrior)
+        .endings(3, new int[WordShape.values().length], new AffixTrie[] {trie.build()}).build();
   }
 
   /** {@code length} tokens drawn from the model's lexicon, each unknown with probability {@code unknownRate}. */
@@ -152,28 +152,29 @@ public final class TestModels {
   }
 
   private static UnknownWordModel smallUnknownWords(Lexicon lexicon) {
-    SuffixTrie.Builder lower = new SuffixTrie.Builder();
+    AffixTrie.Builder lower = new AffixTrie.Builder();
     lower.add("walked", 2, 3, 4);
     lower.add("talked", 2, 2, 4);
     lower.add("table", 1, 4, 4);
     lower.add("ending", 1, 1, 4);
-    SuffixTrie.Builder upper = new SuffixTrie.Builder();
+    AffixTrie.Builder upper = new AffixTrie.Builder();
     upper.add("Bern", 1, 5, 4);
     int[] trieOfShape = {0, 1, 1, 0, 0};
     // words written with a capital are divided by other priors than the rest, as with capitalisation states
     // beginnings, counted lower-cased and reversed ("walked" as "deklaw")
-    SuffixTrie.Builder lowerBeginnings = new SuffixTrie.Builder();
+    AffixTrie.Builder lowerBeginnings = new AffixTrie.Builder();
     lowerBeginnings.add("deklaw", 2, 3, 3);
     lowerBeginnings.add("elbat", 1, 4, 3);
-    SuffixTrie.Builder upperBeginnings = new SuffixTrie.Builder();
+    AffixTrie.Builder upperBeginnings = new AffixTrie.Builder();
     upperBeginnings.add("nreb", 1, 5, 3);
         // and capitalised words known in lower case ("Walks", "RUN") are weighed by that form's tag
     LowerCaseFormCue cue = new LowerCaseFormCue(new double[] {Math.log(0.5), Math.log(0.3), Math.log(0.2)},
         new double[] {1, 1, 1.5, 0.5, 0.25, 3}, 3, 2, lexicon, StateSpace.oneStatePerTag(3));
-    return new UnknownWordModel(0.75, 4, new int[] {1, 2}, new double[] {Math.log(0.4), Math.log(0.35), Math.log(0.25)},
-        new double[] {Math.log(0.5), Math.log(0.45), Math.log(0.05)}, new double[] {0.6, 0.4}, trieOfShape,
-        new SuffixTrie[] {lower.build(), upper.build()}, cue, 3, new SuffixTrie[] {lowerBeginnings.build(),
-            upperBeginnings.build()});
+    return UnknownWordModel.builder().theta(0.75).openTags(new int[] {1, 2}, new double[] {0.6, 0.4})
+        .logPriors(new double[] {Math.log(0.4), Math.log(0.35), Math.log(0.25)},
+            new double[] {Math.log(0.5), Math.log(0.45), Math.log(0.05)})
+        .endings(4, trieOfShape, new AffixTrie[] {lower.build(), upper.build()}).lowerCaseForms(cue)
+        .beginnings(3, new AffixTrie[] {lowerBeginnings.build(), upperBeginnings.build()}).build();
   }
 
   /** The bytes {@link ModelFile#write(HmmModel, IndexOutput)} produces for {@code model}. */

@@ -61,7 +61,7 @@ final class ExpectedCounts {
     this.logLikelihood += logLikelihood;
     sentences++;
     this.tokens += lattice.size();
-    decoder.addExpectedTransitions(transitions);
+    ExpectedTransitions.add(decoder, transitions);
     addEmissions(decoder, lattice, tokens);
   }
 

@@ -57,8 +57,8 @@ final class Reestimation {
     double[] totals = counts.unknownTags.clone();
     Lexicon lexicon = counts.model().lexicon();
     for (int w = 0; w < lexicon.size(); w++) {
-      for (int k = 0; k < lexicon.tagCount(w); k++) {
-        totals[lexicon.tag(w, k)] += counts.pairs[lexicon.pairIndex(w, k)];
+      for (int k = 0; k < lexicon.stateCount(w); k++) {
+        totals[lexicon.state(w, k)] += counts.pairs[lexicon.pairIndex(w, k)];
       }
     }
     return totals;
@@ -70,11 +70,11 @@ final class Reestimation {
     for (int w = 0; w < lexicon.size(); w++) {
       String word = lexicon.word(w);
       int startWord = start.lexicon().lookup(word);
-      int n = lexicon.tagCount(w);
+      int n = lexicon.stateCount(w);
       double[] expected = new double[n];
       int[] tags = new int[n];
       for (int k = 0; k < n; k++) {
-        tags[k] = lexicon.tag(w, k);
+        tags[k] = lexicon.state(w, k);
         expected[k] = counts.pairs[lexicon.pairIndex(w, k)];
       }
       Lexicon.Entry entry = sum(expected) > 0 ? entry(word, tags, expected, tagTotals, startWord) : startEntry(word, startWord);
@@ -92,11 +92,11 @@ final class Reestimation {
 
   /** One lexicon entry as it is stored. */
   static Lexicon.Entry entryOf(Lexicon lexicon, int word) {
-    int n = lexicon.tagCount(word);
+    int n = lexicon.stateCount(word);
     int[] tags = new int[n];
     float[] emissions = new float[n];
     for (int k = 0; k < n; k++) {
-      tags[k] = lexicon.tag(word, k);
+      tags[k] = lexicon.state(word, k);
       emissions[k] = lexicon.logEmission(word, k);
     }
     return new Lexicon.Entry(lexicon.word(word), tags, emissions);
@@ -150,8 +150,8 @@ final class Reestimation {
       return Double.NEGATIVE_INFINITY;
     }
     Lexicon lexicon = start.lexicon();
-    for (int k = 0; k < lexicon.tagCount(startWord); k++) {
-      if (lexicon.tag(startWord, k) == tag) {
+    for (int k = 0; k < lexicon.stateCount(startWord); k++) {
+      if (lexicon.state(startWord, k) == tag) {
         return lexicon.logEmission(startWord, k);
       }
     }

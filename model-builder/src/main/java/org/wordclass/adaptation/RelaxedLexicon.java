@@ -35,8 +35,8 @@ final class RelaxedLexicon {
     Arrays.fill(smallest, Double.POSITIVE_INFINITY);
     double overall = Double.POSITIVE_INFINITY;
     for (int w = 0; w < lexicon.size(); w++) {
-      for (int k = 0; k < lexicon.tagCount(w); k++) {
-        int t = lexicon.tag(w, k);
+      for (int k = 0; k < lexicon.stateCount(w); k++) {
+        int t = lexicon.state(w, k);
         smallest[t] = Math.min(smallest[t], lexicon.logEmission(w, k));
         overall = Math.min(overall, smallest[t]);
       }
@@ -49,12 +49,12 @@ final class RelaxedLexicon {
 
   /** The entry opened to every state of every open tag (entries list states). */
   private static Lexicon.Entry relaxed(Lexicon.Entry entry, StateSpace states, UnknownWordModel unknown, double[] floorLog) {
-    int[] tags = Arrays.copyOf(entry.tags(), entry.tags().length + states.size());
+    int[] tags = Arrays.copyOf(entry.states(), entry.states().length + states.size());
     float[] emissions = Arrays.copyOf(entry.logEmissions(), tags.length);
-    int n = entry.tags().length;
+    int n = entry.states().length;
     for (int k = 0; k < unknown.openTagCount(); k++) {
       for (int state : states.statesOf(unknown.openTag(k))) {
-        if (Arrays.binarySearch(entry.tags(), state) < 0) {
+        if (Arrays.binarySearch(entry.states(), state) < 0) {
           tags[n] = state;
           emissions[n] = (float) floorLog[state];
           n++;

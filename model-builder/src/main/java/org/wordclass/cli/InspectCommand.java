@@ -17,7 +17,7 @@ import org.wordclass.model.Checksums;
 import org.wordclass.model.HmmModel;
 import org.wordclass.model.StateSpace;
 import org.wordclass.model.ModelFile;
-import org.wordclass.model.SuffixTrie;
+import org.wordclass.model.AffixTrie;
 import org.wordclass.model.TagSet;
 import org.wordclass.model.WordShape;
 import picocli.CommandLine.Command;
@@ -95,23 +95,23 @@ final class InspectCommand extends BaseCommand {
   }
 
   /**
-   * Nodes of each suffix trie, keyed by the word shapes that share it ({@code LOWER+ALL_CAPS}),
+   * Nodes of each trie of word endings, keyed by the word shapes that share it ({@code LOWER+ALL_CAPS}),
    * then of the tries of word beginnings where the model has them ({@code beginnings: ...}).
    */
   private static Map<String, Integer> trieSizes(HmmModel m) {
-    Map<SuffixTrie, String> shapesOfTrie = new IdentityHashMap<>();
+    Map<AffixTrie, String> shapesOfTrie = new IdentityHashMap<>();
     Map<String, Integer> sizes = new LinkedHashMap<>();
-    List<SuffixTrie> order = new ArrayList<>();
+    List<AffixTrie> order = new ArrayList<>();
     for (WordShape shape : WordShape.values()) {
-      SuffixTrie trie = m.unknownWords().suffixTrie(shape);
+      AffixTrie trie = m.unknownWords().endingTrie(shape);
       if (shapesOfTrie.merge(trie, shape.name(), (a, b) -> a + "+" + b).equals(shape.name())) {
         order.add(trie);
       }
     }
-    for (SuffixTrie trie : order) {
+    for (AffixTrie trie : order) {
       sizes.put(shapesOfTrie.get(trie), trie.nodeCount());
     }
-    SuffixTrie[] beginnings = m.unknownWords().prefixTries();
+    AffixTrie[] beginnings = m.unknownWords().beginningTries();
     if (beginnings != null) {
       sizes.put("beginnings: LOWER+HAS_DIGIT+NO_LETTER", beginnings[0].nodeCount());
       sizes.put("beginnings: CAPITALISED+ALL_CAPS", beginnings[1].nodeCount());

@@ -111,11 +111,13 @@ final class TrainingOptionsMixin {
   /** The options given; a value the estimator refuses is reported as a usage error. */
   TrainingOptions toOptions() {
     try {
-      TrainingOptions options = new TrainingOptions(order, maxSuffixLength, rareWordMaxCount,
-          TrainingOptions.SuffixWeightRule.HELD_OUT, Double.NaN, openClassMinShare, shapeClasses,
-          capitalisationStates, contextEmissions, lowercaseFirstWord, contextMinCount, latentRounds,
-          unknownWordPrior(unknownWordPrior), lowerCaseForms, maxPrefixLength, minTagShare,
-          lowercaseMidSentenceFirstWord);
+      TrainingOptions options = TrainingOptions.builder().order(order).maxSuffixLength(maxSuffixLength)
+          .rareWordMaxCount(rareWordMaxCount).suffixWeightRule(TrainingOptions.SuffixWeightRule.HELD_OUT)
+          .openClassMinShare(openClassMinShare).shapeClasses(shapeClasses).capitalisationStates(capitalisationStates)
+          .contextEmissions(contextEmissions).lowercaseFirstWord(lowercaseFirstWord).contextMinCount(contextMinCount)
+          .latentRounds(latentRounds).unknownWordPrior(unknownWordPrior(unknownWordPrior)).lowerCaseForms(lowerCaseForms)
+          .maxPrefixLength(maxPrefixLength).minTagShare(minTagShare)
+          .lowercaseMidSentenceFirstWord(lowercaseMidSentenceFirstWord).build();
       return withSuffixWeight(options, suffixWeight);
     } catch (IllegalArgumentException e) {
       throw new ParameterException(mixee.commandLine(), "Invalid training option: " + e.getMessage());

@@ -75,7 +75,7 @@ public final class MostFrequentTagBaseline {
 
   private int mostLikelyUnknown(char[] chars) {
     UnknownWordModel unknown = model.unknownWords();
-    unknown.tagDistribution(chars, 0, chars.length, unknown.theta(), null, scratch, scores);
+    unknown.tagDistribution(chars, 0, chars.length, unknown.theta(), scratch, scores);
     int best = 0;
     for (int k = 1; k < scores.length; k++) {
       if (scores[k] > scores[best]) {

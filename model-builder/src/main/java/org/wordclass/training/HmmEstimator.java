@@ -11,8 +11,9 @@ import org.wordclass.model.HmmModel;
 import org.wordclass.model.Lexicon;
 import org.wordclass.model.LowerCaseFormCue;
 import org.wordclass.model.LowerCaseForms;
+import org.wordclass.model.Spelling;
 import org.wordclass.model.StateSpace;
-import org.wordclass.model.SuffixTrie;
+import org.wordclass.model.AffixTrie;
 import org.wordclass.model.TagSet;
 import org.wordclass.model.UnknownWordModel;
 import org.wordclass.model.WordShape;
@@ -217,11 +218,11 @@ public final class HmmEstimator {
     int[] openTags = openTags(wordTags, finalId, tagCount);
     int[] trieOfShape = trieOfShape();
     int trieCount = Arrays.stream(trieOfShape).max().getAsInt() + 1;
-    SuffixTrie.Builder[] builders = new SuffixTrie.Builder[trieCount];
+    AffixTrie.Builder[] builders = new AffixTrie.Builder[trieCount];
     for (int i = 0; i < trieCount; i++) {
-      builders[i] = new SuffixTrie.Builder();
+      builders[i] = new AffixTrie.Builder();
     }
-    SuffixTrie.Builder[] prefixBuilders = {new SuffixTrie.Builder(), new SuffixTrie.Builder()};
+    AffixTrie.Builder[] beginningBuilders = {new AffixTrie.Builder(), new AffixTrie.Builder()};
     long[] rareByTag = new long[tagCount];
     TreeMap<String, Map<Integer, Integer>> byWord = new TreeMap<>(wordTags);
     for (Map.Entry<String, Map<Integer, Integer>> word : byWord.entrySet()) {
@@ -232,14 +233,14 @@ public final class HmmEstimator {
       String w = word.getKey();
       char[] chars = w.toCharArray();
       WordShape shape = WordShape.classify(chars, 0, chars.length);
-      SuffixTrie.Builder trie = builders[trieOfShape[shape.ordinal()]];
+      AffixTrie.Builder trie = builders[trieOfShape[shape.ordinal()]];
       boolean capitalised = shape.capitalisationOnly() == WordShape.CAPITALISED;
       String beginnings = options.maxPrefixLength() > 0 ? lowerCasedReversed(chars) : null;
       for (Map.Entry<Integer, Integer> e : new TreeMap<>(word.getValue()).entrySet()) {
         int tag = finalId[e.getKey() + 1];
         trie.add(w, tag, e.getValue(), options.maxSuffixLength());
         if (options.maxPrefixLength() > 0) {
-          prefixBuilders[capitalised ? 1 : 0].add(beginnings, tag, e.getValue(), options.maxPrefixLength());
+          beginningBuilders[capitalised ? 1 : 0].add(beginnings, tag, e.getValue(), options.maxPrefixLength());
         }
         rareByTag[tag] += e.getValue();
       }
@@ -254,12 +255,12 @@ public final class HmmEstimator {
     for (int k = 0; k < openTags.length; k++) {
       base[k] /= mass;
     }
-    SuffixTrie[] tries = new SuffixTrie[trieCount];
+    AffixTrie[] tries = new AffixTrie[trieCount];
     for (int i = 0; i < trieCount; i++) {
       tries[i] = builders[i].build();
     }
-    UnknownWordModel model = new UnknownWordModel(1.0, options.maxSuffixLength(), openTags, logPrior,
-        logPriorCapitalised, base, trieOfShape, tries);
+    UnknownWordModel model = UnknownWordModel.builder().theta(1.0).openTags(openTags, base)
+        .logPriors(logPrior, logPriorCapitalised).endings(options.maxSuffixLength(), trieOfShape, tries).build();
     double theta = switch (options.suffixWeightRule()) {
       case HELD_OUT -> SuffixWeightSelection.choose(model, wordTags, finalId, options.rareWordMaxCount());
       case TAG_SPREAD -> tagProbabilitySpread(tagTokens, total);
@@ -269,10 +270,10 @@ public final class HmmEstimator {
     // sub-states replace: a model with latent states goes without it
     LowerCaseFormCue cue = options.lowerCaseForms() && options.latentRounds() == 0
         ? lowerCaseFormCue(counts, wordTags, finalId, openTags, tagCount, lexicon, plan) : null;
-    SuffixTrie[] prefixTries = options.maxPrefixLength() > 0
-        ? new SuffixTrie[] {prefixBuilders[0].build(), prefixBuilders[1].build()} : null;
-    return new UnknownWordModel(theta, options.maxSuffixLength(), openTags, logPrior, logPriorCapitalised, base,
-        trieOfShape, tries, cue, options.maxPrefixLength(), prefixTries);
+    AffixTrie[] beginningTries = options.maxPrefixLength() > 0
+        ? new AffixTrie[] {beginningBuilders[0].build(), beginningBuilders[1].build()} : null;
+    return model.toBuilder().theta(theta).lowerCaseForms(cue).beginnings(options.maxPrefixLength(), beginningTries)
+        .build();
   }
 
   /**
@@ -282,7 +283,7 @@ public final class HmmEstimator {
   static String lowerCasedReversed(char[] chars) {
     char[] out = new char[chars.length];
     for (int i = 0; i < chars.length; i++) {
-      out[chars.length - 1 - i] = Character.toLowerCase(chars[i]);
+      out[chars.length - 1 - i] = Spelling.lowerCase(chars[i]);
     }
     return new String(out);
   }

@@ -5,6 +5,7 @@ import java.util.List;
 import java.util.Random;
 import java.util.TreeMap;
 import org.apache.lucene.util.ArrayUtil;
+import org.wordclass.adaptation.ExpectedTransitions;
 import org.wordclass.decoding.Decoder;
 import org.wordclass.decoding.Lattice;
 import org.wordclass.model.StateSpace;
@@ -76,7 +77,7 @@ final class LatentCounts {
       throw new IllegalStateException("the model gives a training sentence probability zero: " + words);
     }
     logLikelihood += sentenceLogLikelihood;
-    decoder.addExpectedTransitions(transitions);
+    ExpectedTransitions.add(decoder, transitions);
     for (int i = 0; i < lattice.size(); i++) {
       int w = lattice.wordId(i);
       for (int k = 0; k < lattice.candidateCount(i); k++) {

@@ -103,7 +103,7 @@ public final class LatentStates {
     int[][] wordStates = new int[lexicon.size()][];
     for (int w = 0; w < lexicon.size(); w++) {
       int word = w;
-      wordStates[w] = IntStream.range(0, lexicon.tagCount(w)).map(k -> lexicon.tag(word, k)).toArray();
+      wordStates[w] = IntStream.range(0, lexicon.stateCount(w)).map(k -> lexicon.state(word, k)).toArray();
     }
     int[] family = IntStream.range(0, start.states().size()).toArray();
     return new LatentCounts(start.states(), family, start.order() + 1, wordStates);

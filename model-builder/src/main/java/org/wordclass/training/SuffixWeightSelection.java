@@ -21,7 +21,7 @@ final class SuffixWeightSelection {
     int open = model.openTagCount();
     double[] logLikelihood = new double[CANDIDATES.length];
     long[] heldOut = new long[open];
-    double[] scratch = new double[open];
+    LeaveOneOutEndings endings = new LeaveOneOutEndings(model);
     double[] dist = new double[open];
     for (Map.Entry<String, Map<Integer, Integer>> word : wordTags.entrySet()) {
       Map<Integer, Integer> tags = word.getValue();
@@ -38,7 +38,7 @@ final class SuffixWeightSelection {
       }
       char[] chars = word.getKey().toCharArray();
       for (int c = 0; c < CANDIDATES.length; c++) {
-        model.tagDistribution(chars, 0, chars.length, CANDIDATES[c], heldOut, scratch, dist);
+        endings.tagDistribution(chars, CANDIDATES[c], heldOut, dist);
         for (int k = 0; k < open; k++) {
           if (heldOut[k] > 0) {
             logLikelihood[c] += heldOut[k] * Math.log(dist[k]);

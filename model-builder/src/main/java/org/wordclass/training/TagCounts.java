@@ -4,6 +4,7 @@ import java.util.ArrayList;
 import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
+import org.wordclass.model.Spelling;
 
 /**
  * The counts an HMM is estimated from, gathered one sentence at a time: how often each word
@@ -70,7 +71,7 @@ public final class TagCounts {
     int b = 0;
     for (int i = 0; i < words.size(); i++) {
       String word = words.get(i);
-      int state = rawState(tagId(tags.get(i)), i > 0 && startsWithCapital(word));
+      int state = rawState(tagId(tags.get(i)), i > 0 && Spelling.startsWithCapital(word));
       wordStates.computeIfAbsent(word, w -> new HashMap<>(2)).merge(state, 1, Integer::sum);
       int c = state + 1;
       wordContexts.computeIfAbsent(word, w -> new HashMap<>(2)).merge((b << 16) | c, 1, Integer::sum);
@@ -80,10 +81,6 @@ public final class TagCounts {
       tokens++;
     }
     trigrams.merge(key(a, b, 0), 1L, Long::sum);
-  }
-
-  private static boolean startsWithCapital(String word) {
-    return !word.isEmpty() && (Character.isUpperCase(word.charAt(0)) || Character.isTitleCase(word.charAt(0)));
   }
 
   /** A tag id with the capitalisation bit. */

@@ -66,9 +66,11 @@ public record TrainingOptions(
     double minTagShare,
     boolean lowercaseMidSentenceFirstWord) {
 
-  public static final TrainingOptions DEFAULTS =
-      new TrainingOptions(2, 10, 10, SuffixWeightRule.HELD_OUT, Double.NaN, 0.002, false, true, true, true, 3, 0,
-          UnknownWordPrior.LOWER_CASE_STATE, true, 4, 0.002, true);
+  public static final TrainingOptions DEFAULTS = new Builder().order(2).maxSuffixLength(10).rareWordMaxCount(10)
+      .suffixWeightRule(SuffixWeightRule.HELD_OUT).openClassMinShare(0.002).shapeClasses(false)
+      .capitalisationStates(true).contextEmissions(true).lowercaseFirstWord(true).contextMinCount(3).latentRounds(0)
+      .unknownWordPrior(UnknownWordPrior.LOWER_CASE_STATE).lowerCaseForms(true).maxPrefixLength(4).minTagShare(0.002)
+      .lowercaseMidSentenceFirstWord(true).build();
 
   /** The classic second-order model with a suffix model and none of the later cues. */
   public static final TrainingOptions CLASSIC =
@@ -216,33 +218,51 @@ public record TrainingOptions(
   }
 
   /** These options with the changes {@code edit} makes, checked like any others. */
-  private TrainingOptions copy(Consumer<Editable> edit) {
-    Editable b = new Editable(this);
+  private TrainingOptions copy(Consumer<Builder> edit) {
+    Builder b = toBuilder();
     edit.accept(b);
     return b.build();
   }
 
-  /** The components as fields, so that each with-method states only what it changes. */
-  private static final class Editable {
-    int order;
-    int maxSuffixLength;
-    int rareWordMaxCount;
-    SuffixWeightRule suffixWeightRule;
-    double suffixWeight;
-    double openClassMinShare;
-    boolean shapeClasses;
-    boolean capitalisationStates;
-    boolean contextEmissions;
-    boolean lowercaseFirstWord;
-    int contextMinCount;
-    int latentRounds;
-    UnknownWordPrior unknownWordPrior;
-    boolean lowerCaseForms;
-    int maxPrefixLength;
-    double minTagShare;
-    boolean lowercaseMidSentenceFirstWord;
+  /** A builder starting from the defaults, {@link #DEFAULTS}. */
+  public static Builder builder() {
+    return DEFAULTS.toBuilder();
+  }
 
-    Editable(TrainingOptions o) {
+  /** A builder starting from these options. */
+  public Builder toBuilder() {
+    return new Builder(this);
+  }
+
+  /**
+   * The options by name rather than by position; {@link #build} checks them together, as the
+   * record's constructor does. Each setter is named after the component it sets (see the record's
+   * parameters for their meaning).
+   */
+  public static final class Builder {
+    private int order;
+    private int maxSuffixLength;
+    private int rareWordMaxCount;
+    private SuffixWeightRule suffixWeightRule;
+    private double suffixWeight;
+    private double openClassMinShare;
+    private boolean shapeClasses;
+    private boolean capitalisationStates;
+    private boolean contextEmissions;
+    private boolean lowercaseFirstWord;
+    private int contextMinCount;
+    private int latentRounds;
+    private UnknownWordPrior unknownWordPrior;
+    private boolean lowerCaseForms;
+    private int maxPrefixLength;
+    private double minTagShare;
+    private boolean lowercaseMidSentenceFirstWord;
+
+    private Builder() {
+      suffixWeight = Double.NaN;
+    }
+
+    private Builder(TrainingOptions o) {
       order = o.order;
       maxSuffixLength = o.maxSuffixLength;
       rareWordMaxCount = o.rareWordMaxCount;
@@ -262,7 +282,97 @@ public record TrainingOptions(
       lowercaseMidSentenceFirstWord = o.lowercaseMidSentenceFirstWord;
     }
 
-    TrainingOptions build() {
+    public Builder order(int value) {
+      order = value;
+      return this;
+    }
+
+    public Builder maxSuffixLength(int value) {
+      maxSuffixLength = value;
+      return this;
+    }
+
+    public Builder rareWordMaxCount(int value) {
+      rareWordMaxCount = value;
+      return this;
+    }
+
+    /** θ chosen by {@code rule}; a fixed θ is given with {@link #suffixWeight}. */
+    public Builder suffixWeightRule(SuffixWeightRule rule) {
+      suffixWeightRule = rule;
+      suffixWeight = Double.NaN;
+      return this;
+    }
+
+    /** A fixed θ (the rule {@link SuffixWeightRule#FIXED}). */
+    public Builder suffixWeight(double weight) {
+      suffixWeightRule = SuffixWeightRule.FIXED;
+      suffixWeight = weight;
+      return this;
+    }
+
+    public Builder openClassMinShare(double value) {
+      openClassMinShare = value;
+      return this;
+    }
+
+    public Builder shapeClasses(boolean value) {
+      shapeClasses = value;
+      return this;
+    }
+
+    public Builder capitalisationStates(boolean value) {
+      capitalisationStates = value;
+      return this;
+    }
+
+    public Builder contextEmissions(boolean value) {
+      contextEmissions = value;
+      return this;
+    }
+
+    public Builder lowercaseFirstWord(boolean value) {
+      lowercaseFirstWord = value;
+      return this;
+    }
+
+    public Builder contextMinCount(int value) {
+      contextMinCount = value;
+      return this;
+    }
+
+    public Builder latentRounds(int value) {
+      latentRounds = value;
+      return this;
+    }
+
+    public Builder unknownWordPrior(UnknownWordPrior value) {
+      unknownWordPrior = value;
+      return this;
+    }
+
+    public Builder lowerCaseForms(boolean value) {
+      lowerCaseForms = value;
+      return this;
+    }
+
+    public Builder maxPrefixLength(int value) {
+      maxPrefixLength = value;
+      return this;
+    }
+
+    public Builder minTagShare(double value) {
+      minTagShare = value;
+      return this;
+    }
+
+    public Builder lowercaseMidSentenceFirstWord(boolean value) {
+      lowercaseMidSentenceFirstWord = value;
+      return this;
+    }
+
+    /** @throws IllegalArgumentException for a value or a combination the record refuses */
+    public TrainingOptions build() {
       return new TrainingOptions(order, maxSuffixLength, rareWordMaxCount, suffixWeightRule, suffixWeight,
           openClassMinShare, shapeClasses, capitalisationStates, contextEmissions, lowercaseFirstWord, contextMinCount,
           latentRounds, unknownWordPrior, lowerCaseForms, maxPrefixLength, minTagShare, lowercaseMidSentenceFirstWord);

@@ -105,8 +105,8 @@ class AdaptationTest {
 
   private static Set<Integer> tags(Lexicon lexicon, int word) {
     Set<Integer> tags = new HashSet<>();
-    for (int k = 0; k < lexicon.tagCount(word); k++) {
-      tags.add(lexicon.tag(word, k));
+    for (int k = 0; k < lexicon.stateCount(word); k++) {
+      tags.add(lexicon.state(word, k));
     }
     return tags;
   }
@@ -123,7 +123,7 @@ class AdaptationTest {
       Lexicon.Entry expected = start.lexicon().entries().get(w);
       Lexicon.Entry actual = adapted.lexicon().entries().get(w);
       assertEquals(expected.word(), actual.word());
-      assertArrayEquals(expected.tags(), actual.tags());
+      assertArrayEquals(expected.states(), actual.states());
       assertArrayEquals(expected.logEmissions(), actual.logEmissions());
     }
     // and a positive weight does change them, so the comparison above can tell

@@ -31,7 +31,7 @@ class ExpectedTransitionsTest {
       tokens.forEach(lattice::add);
       double logLikelihood = decoder.forwardBackward();
       double[] counts = new double[order == 2 ? cube(tags + 1) : square(tags + 1)];
-      decoder.addExpectedTransitions(counts);
+      ExpectedTransitions.add(decoder, counts);
 
       BruteForce expected = new BruteForce(model, lattice, order);
       String where = "trial " + trial + ", tokens " + tokens;

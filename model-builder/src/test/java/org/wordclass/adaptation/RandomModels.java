@@ -7,7 +7,7 @@ import java.util.Map;
 import java.util.Random;
 import org.wordclass.model.HmmModel;
 import org.wordclass.model.Lexicon;
-import org.wordclass.model.SuffixTrie;
+import org.wordclass.model.AffixTrie;
 import org.wordclass.model.TagSet;
 import org.wordclass.model.UnknownWordModel;
 import org.wordclass.model.WordShape;
@@ -72,12 +72,12 @@ final class RandomModels {
       open[t] = t;
     }
     double[] logPrior = Arrays.stream(distribution(random, tagCount)).map(Math::log).toArray();
-    SuffixTrie.Builder trie = new SuffixTrie.Builder();
+    AffixTrie.Builder trie = new AffixTrie.Builder();
     for (String ending : new String[] {"ab", "ba", "bb", "aa"}) {
       trie.add("x" + ending, random.nextInt(tagCount), 1 + random.nextInt(4), 3);
     }
-    return new UnknownWordModel(0.5, 3, open, logPrior, distribution(random, tagCount),
-        new int[WordShape.values().length], new SuffixTrie[] {trie.build()});
+    return UnknownWordModel.builder().theta(0.5).openTags(open, distribution(random, tagCount)).logPrior(logPrior)
+        .endings(3, new int[WordShape.values().length], new AffixTrie[] {trie.build()}).build();
   }
 
   /** A sentence of known words w.. and unknown words x..; unknown ones only if {@code withUnknown}. */

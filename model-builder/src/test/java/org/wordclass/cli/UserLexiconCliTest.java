@@ -83,7 +83,7 @@ class UserLexiconCliTest {
   private static int[] statesOf(HmmModel model, String word) {
     int w = model.lexicon().lookup(word);
     assertTrue(w >= 0, word);
-    return IntStream.range(0, model.lexicon().tagCount(w)).map(k -> model.lexicon().tag(w, k)).toArray();
+    return IntStream.range(0, model.lexicon().stateCount(w)).map(k -> model.lexicon().state(w, k)).toArray();
   }
 
   @Test

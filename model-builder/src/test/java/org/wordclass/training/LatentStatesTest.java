@@ -146,7 +146,7 @@ class LatentStatesTest {
       Lexicon.Entry written = latent.lexicon().entries().get(w);
       Lexicon.Entry loaded = read.lexicon().entries().get(w);
       assertEquals(written.word(), loaded.word());
-      assertArrayEquals(written.tags(), loaded.tags());
+      assertArrayEquals(written.states(), loaded.states());
       assertArrayEquals(written.logEmissions(), loaded.logEmissions());
     }
     assertEquals(latent.provenance(), read.provenance());

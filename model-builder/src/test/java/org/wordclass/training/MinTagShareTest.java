@@ -31,8 +31,8 @@ class MinTagShareTest {
     Lexicon lexicon = model.lexicon();
     int id = lexicon.lookup(word);
     Set<String> tags = new TreeSet<>();
-    for (int k = 0; k < lexicon.tagCount(id); k++) {
-      tags.add(model.tags().name(model.states().tagOf(lexicon.tag(id, k))));
+    for (int k = 0; k < lexicon.stateCount(id); k++) {
+      tags.add(model.tags().name(model.states().tagOf(lexicon.state(id, k))));
     }
     return tags;
   }

@@ -1,0 +1,6 @@
+/**
+ * The Elasticsearch plugin: the {@code wordClass} token filter and the two word-class queries,
+ * as thin adapters over {@link org.wordclass.engine}; settings errors answer HTTP 400. See
+ * {@code docs/elasticsearch.md}.
+ */
+package org.wordclass.elasticsearch;
