@@ -8,6 +8,7 @@ import org.apache.lucene.analysis.TokenStream;
 import org.apache.lucene.analysis.tokenattributes.CharTermAttribute;
 import org.apache.lucene.analysis.tokenattributes.KeywordAttribute;
 import org.apache.lucene.analysis.tokenattributes.PayloadAttribute;
+import org.apache.lucene.analysis.tokenattributes.PayloadAttributeImpl;
 import org.apache.lucene.analysis.tokenattributes.PositionIncrementAttribute;
 import org.apache.lucene.analysis.tokenattributes.SentenceAttribute;
 import org.apache.lucene.analysis.tokenattributes.TypeAttribute;
@@ -107,9 +108,15 @@ public final class WordClassFilter extends TokenFilter {
   /**
    * This stream's attribute implementations and, per slot, their clones in the same order, so
    * that saving and restoring a token copies impl to impl directly; {@link
-   * AttributeSource#copyTo} would look every target impl up by class, twice per token.
+   * AttributeSource#copyTo} would look every target impl up by class, twice per token. Impls
+   * that {@link #emit} sets in full (the class, and the payload where this filter writes it) are
+   * left out: copying them would be overwritten anyway.
    */
   private AttributeImpl[] liveImpls = new AttributeImpl[0];
+  /** Where each of {@link #liveImpls} stands among all impls of the stream, in iteration order. */
+  private int[] implPositions = new int[0];
+  /** How many impls the stream had when the pool was built, the left-out ones included. */
+  private int implCount;
   private AttributeImpl[][] slotImpls = new AttributeImpl[0][];
   private int[] best = new int[64];
 
@@ -271,17 +278,27 @@ public final class WordClassFilter extends TokenFilter {
     }
   }
 
-  /** The impls of {@code source} in iteration order, which {@link #cloneAttributes} keeps. */
+  /** The impls of {@code source} that match {@link #liveImpls}, in the iteration order {@link #cloneAttributes} keeps. */
   private AttributeImpl[] impls(AttributeSource source) {
     AttributeImpl[] impls = new AttributeImpl[liveImpls.length];
     Iterator<AttributeImpl> it = source.getAttributeImplsIterator();
-    for (int a = 0; a < impls.length; a++) {
-      impls[a] = it.next();
-      if (impls[a].getClass() != liveImpls[a].getClass()) {
-        throw new IllegalStateException("a clone of the token's attributes lists them in another order");
+    int a = 0;
+    for (int position = 0; a < impls.length; position++) {
+      AttributeImpl impl = it.next();
+      if (position == implPositions[a]) {
+        if (impl.getClass() != liveImpls[a].getClass()) {
+          throw new IllegalStateException("a clone of the token's attributes lists them in another order");
+        }
+        impls[a++] = impl;
       }
     }
     return impls;
+  }
+
+  /** Whether {@link #emit} sets every field of {@code impl}, so that it need not be saved and restored. */
+  private boolean setInFull(AttributeImpl impl) {
+    return impl == (Object) classAtt && impl.getClass() == WordClassAttributeImpl.class
+        || payloadAtt != null && impl == (Object) payloadAtt && impl.getClass() == PayloadAttributeImpl.class;
   }
 
   private void swapSlots(int a, int b) {
@@ -315,15 +332,24 @@ public final class WordClassFilter extends TokenFilter {
     for (Iterator<AttributeImpl> it = getAttributeImplsIterator(); it.hasNext(); it.next()) {
       count++;
     }
-    if (count != liveImpls.length) {
+    if (count != implCount) {
       Arrays.fill(slots, null);
       Arrays.fill(slotTerms, null);
       Arrays.fill(slotImpls, null);
-      liveImpls = new AttributeImpl[count];
+      implCount = count;
+      AttributeImpl[] kept = new AttributeImpl[count];
+      int[] positions = new int[count];
+      int size = 0;
       Iterator<AttributeImpl> it = getAttributeImplsIterator();
-      for (int a = 0; a < count; a++) {
-        liveImpls[a] = it.next();
+      for (int position = 0; position < count; position++) {
+        AttributeImpl impl = it.next();
+        if (!setInFull(impl)) {
+          kept[size] = impl;
+          positions[size++] = position;
+        }
       }
+      liveImpls = Arrays.copyOf(kept, size);
+      implPositions = Arrays.copyOf(positions, size);
     }
   }
 }
