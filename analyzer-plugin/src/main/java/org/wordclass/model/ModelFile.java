@@ -86,10 +86,7 @@ public final class ModelFile {
     writeMap(out, model.provenance());
     out.writeByte((byte) model.order());
     TagSet tags = model.tags();
-    out.writeVInt(tags.size());
-    for (String name : tags.names()) {
-      out.writeString(name);
-    }
+    tags.writeTo(out);
     StateSpace states = model.states();
     out.writeVInt(states.size());
     for (int s = 0; s < states.size(); s++) {
@@ -275,12 +272,8 @@ public final class ModelFile {
     Limits limits = new Limits(in, name);
     Map<String, String> provenance = readMap(in, limits);
     int order = in.readByte();
-    int tagCount = limits.count(vInt(in), 1, "tags");
-    List<String> names = new ArrayList<>(tagCount);
-    for (int i = 0; i < tagCount; i++) {
-      names.add(limits.string());
-    }
-    TagSet tags = new TagSet(names);
+    TagSet tags = TagSet.readFrom(in, limits);
+    int tagCount = tags.size();
     StateSpace states = readStates(in, limits, tagCount);
     HmmModel.DecodingCues cues = readCues(in, version, name);
     long n = states.size() + 1;

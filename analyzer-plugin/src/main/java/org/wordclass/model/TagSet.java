@@ -1,10 +1,14 @@
 package org.wordclass.model;
 
+import java.io.IOException;
+import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.Collections;
 import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
+import org.apache.lucene.store.DataInput;
+import org.apache.lucene.store.DataOutput;
 
 /**
  * The ordered set of word classes a model can assign, such as the 17 Universal Dependencies
@@ -56,6 +60,27 @@ public final class TagSet {
 
   public List<String> names() {
     return Collections.unmodifiableList(Arrays.asList(names));
+  }
+
+  /** Writes the tag set in the model file's layout ({@code docs/model-format.md}): its size, then each name. */
+  void writeTo(DataOutput out) throws IOException {
+    out.writeVInt(names.length);
+    for (String name : names) {
+      out.writeString(name);
+    }
+  }
+
+  /**
+   * Reads a tag set {@link #writeTo} wrote, checking the declared size against the bytes left
+   * before allocating; empty or duplicate names are refused by the constructor.
+   */
+  static TagSet readFrom(DataInput in, ModelFile.Limits limits) throws IOException {
+    int count = limits.count(ModelFile.vInt(in), 1, "tags");
+    List<String> names = new ArrayList<>(count);
+    for (int i = 0; i < count; i++) {
+      names.add(limits.string());
+    }
+    return new TagSet(names);
   }
 
   @Override
