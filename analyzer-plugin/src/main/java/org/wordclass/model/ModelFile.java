@@ -88,11 +88,7 @@ public final class ModelFile {
     TagSet tags = model.tags();
     tags.writeTo(out);
     StateSpace states = model.states();
-    out.writeVInt(states.size());
-    for (int s = 0; s < states.size(); s++) {
-      out.writeVInt(states.tagOf(s));
-      out.writeByte((byte) states.flags(s));
-    }
+    states.writeTo(out);
     HmmModel.DecodingCues cues = model.cues();
     out.writeByte((byte) ((cues.lowercaseFirstWord() ? LOWERCASE_UNKNOWN_FIRST : 0)
         | (cues.lowercaseMidSentenceFirstWord() ? LOWERCASE_MID_SENTENCE_FIRST : 0)));
@@ -274,7 +270,7 @@ public final class ModelFile {
     int order = in.readByte();
     TagSet tags = TagSet.readFrom(in, limits);
     int tagCount = tags.size();
-    StateSpace states = readStates(in, limits, tagCount);
+    StateSpace states = StateSpace.readFrom(in, limits, tagCount);
     HmmModel.DecodingCues cues = readCues(in, version, name);
     long n = states.size() + 1;
     double[] logBigram = readFloats(in, limits.count(n * n, 4, "bigram entries"));
@@ -324,17 +320,6 @@ public final class ModelFile {
       map.put(limits.string(), limits.string());
     }
     return map;
-  }
-
-  private static StateSpace readStates(DataInput in, Limits limits, int tagCount) throws IOException {
-    int count = limits.count(vInt(in), 2, "states");
-    int[] tagOfState = new int[count];
-    byte[] flags = new byte[count];
-    for (int s = 0; s < count; s++) {
-      tagOfState[s] = tagIndex(vInt(in), tagCount);
-      flags[s] = in.readByte();
-    }
-    return new StateSpace(tagCount, tagOfState, flags);
   }
 
   /**

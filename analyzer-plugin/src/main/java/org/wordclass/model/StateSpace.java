@@ -1,6 +1,9 @@
 package org.wordclass.model;
 
+import java.io.IOException;
 import java.util.Arrays;
+import org.apache.lucene.store.DataInput;
+import org.apache.lucene.store.DataOutput;
 
 /**
  * The hidden states of a model and the word class each one stands for. In the plainest model
@@ -79,6 +82,30 @@ public final class StateSpace {
       }
     }
     return false;
+  }
+
+  /** Writes the states in the model file's layout ({@code docs/model-format.md}): their count, then each one's tag and flags. */
+  void writeTo(DataOutput out) throws IOException {
+    out.writeVInt(tagOfState.length);
+    for (int s = 0; s < tagOfState.length; s++) {
+      out.writeVInt(tagOfState[s]);
+      out.writeByte(flags[s]);
+    }
+  }
+
+  /**
+   * Reads states {@link #writeTo} wrote, checking the declared count against the bytes left
+   * before allocating and every tag against {@code tagCount}.
+   */
+  static StateSpace readFrom(DataInput in, ModelFile.Limits limits, int tagCount) throws IOException {
+    int count = limits.count(ModelFile.vInt(in), 2, "states");
+    int[] tagOfState = new int[count];
+    byte[] flags = new byte[count];
+    for (int s = 0; s < count; s++) {
+      tagOfState[s] = ModelFile.tagIndex(ModelFile.vInt(in), tagCount);
+      flags[s] = in.readByte();
+    }
+    return new StateSpace(tagCount, tagOfState, flags);
   }
 
   @Override
