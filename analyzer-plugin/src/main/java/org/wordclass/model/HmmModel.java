@@ -1,9 +1,13 @@
 package org.wordclass.model;
 
+import java.io.IOException;
 import java.util.Collections;
 import java.util.Map;
 import java.util.SortedMap;
 import java.util.TreeMap;
+import org.apache.lucene.index.CorruptIndexException;
+import org.apache.lucene.store.DataInput;
+import org.apache.lucene.store.DataOutput;
 
 /**
  * A hidden Markov model of word classes: the tag set, the lexicon of known words with their
@@ -54,6 +58,37 @@ public final class HmmModel {
     /** Cues without the lower-case lookup of first words known only from mid-sentence. */
     public DecodingCues(boolean lowercaseFirstWord, double unseenContextLogWeight) {
       this(lowercaseFirstWord, unseenContextLogWeight, false);
+    }
+
+    /** Bits of the first-word cue byte: unknown capitalised first words, and those known only from mid-sentence. */
+    private static final int LOWERCASE_UNKNOWN_FIRST = 1;
+    private static final int LOWERCASE_MID_SENTENCE_FIRST = 2;
+
+    /**
+     * Writes the cues in the model file's layout ({@code docs/model-format.md}): the first-word
+     * cue byte, one bit per cue, then the unseen-context weight.
+     */
+    void writeTo(DataOutput out) throws IOException {
+      out.writeByte((byte) ((lowercaseFirstWord ? LOWERCASE_UNKNOWN_FIRST : 0)
+          | (lowercaseMidSentenceFirstWord ? LOWERCASE_MID_SENTENCE_FIRST : 0)));
+      out.writeLong(Double.doubleToLongBits(unseenContextLogWeight));
+    }
+
+    /**
+     * Reads cues {@link #writeTo} wrote in format {@code version}: before
+     * {@link ModelFile#VERSION_FIRST_WORD_BITS} any non-zero first-word byte means the first bit
+     * alone; from it, an unknown bit is refused.
+     */
+    static DecodingCues readFrom(DataInput in, ModelFile.Limits limits, int version) throws IOException {
+      int firstWord = in.readByte();
+      if (version < ModelFile.VERSION_FIRST_WORD_BITS) {
+        firstWord = firstWord != 0 ? LOWERCASE_UNKNOWN_FIRST : 0;
+      } else if ((firstWord & ~(LOWERCASE_UNKNOWN_FIRST | LOWERCASE_MID_SENTENCE_FIRST)) != 0) {
+        throw new CorruptIndexException("unknown first-word cue bits " + firstWord, limits.name());
+      }
+      double unseenContextLogWeight = Double.longBitsToDouble(in.readLong());
+      return new DecodingCues((firstWord & LOWERCASE_UNKNOWN_FIRST) != 0, unseenContextLogWeight,
+          (firstWord & LOWERCASE_MID_SENTENCE_FIRST) != 0);
     }
   }
 

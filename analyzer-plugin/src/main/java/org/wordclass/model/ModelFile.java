@@ -59,10 +59,6 @@ public final class ModelFile {
   public static final int VERSION_FIRST_WORD_BITS = 3;
   public static final int VERSION_CURRENT = VERSION_FIRST_WORD_BITS;
 
-  /** Bits of the first-word cue byte: unknown capitalised first words, and those known only from mid-sentence. */
-  private static final int LOWERCASE_UNKNOWN_FIRST = 1;
-  private static final int LOWERCASE_MID_SENTENCE_FIRST = 2;
-
   /** Largest model file this reader accepts, a guard against reading a wrong file whole. */
   public static final long MAX_FILE_BYTES = 1L << 30;
 
@@ -89,10 +85,7 @@ public final class ModelFile {
     tags.writeTo(out);
     StateSpace states = model.states();
     states.writeTo(out);
-    HmmModel.DecodingCues cues = model.cues();
-    out.writeByte((byte) ((cues.lowercaseFirstWord() ? LOWERCASE_UNKNOWN_FIRST : 0)
-        | (cues.lowercaseMidSentenceFirstWord() ? LOWERCASE_MID_SENTENCE_FIRST : 0)));
-    out.writeLong(Double.doubleToLongBits(model.cues().unseenContextLogWeight()));
+    model.cues().writeTo(out);
     writeFloats(out, model.logBigramTable());
     writeFloats(out, model.logTrigramTable());
     model.lexicon().writeTo(out);
@@ -271,26 +264,13 @@ public final class ModelFile {
     TagSet tags = TagSet.readFrom(in, limits);
     int tagCount = tags.size();
     StateSpace states = StateSpace.readFrom(in, limits, tagCount);
-    HmmModel.DecodingCues cues = readCues(in, version, name);
+    HmmModel.DecodingCues cues = HmmModel.DecodingCues.readFrom(in, limits, version);
     long n = states.size() + 1;
     double[] logBigram = readFloats(in, limits.count(n * n, 4, "bigram entries"));
     double[] logTrigram = readFloats(in, limits.count(n * n * n, 4, "trigram entries"));
     Lexicon lexicon = Lexicon.readFrom(in, limits, states.size());
     UnknownWordModel unknown = readUnknownWords(in, limits, tagCount, version, lexicon, states);
     return new HmmModel(order, tags, states, cues, logBigram, logTrigram, lexicon, unknown, provenance);
-  }
-
-  /** The first-word cue byte (any non-zero value before version 3, one bit per cue from it) and the unseen-context weight. */
-  private static HmmModel.DecodingCues readCues(DataInput in, int version, String name) throws IOException {
-    int firstWord = in.readByte();
-    if (version < VERSION_FIRST_WORD_BITS) {
-      firstWord = firstWord != 0 ? LOWERCASE_UNKNOWN_FIRST : 0;
-    } else if ((firstWord & ~(LOWERCASE_UNKNOWN_FIRST | LOWERCASE_MID_SENTENCE_FIRST)) != 0) {
-      throw new CorruptIndexException("unknown first-word cue bits " + firstWord, name);
-    }
-    double unseenContextLogWeight = Double.longBitsToDouble(in.readLong());
-    return new HmmModel.DecodingCues((firstWord & LOWERCASE_UNKNOWN_FIRST) != 0, unseenContextLogWeight,
-        (firstWord & LOWERCASE_MID_SENTENCE_FIRST) != 0);
   }
 
   /** Checks declared sizes against the bytes left in the file before anything is allocated. */
