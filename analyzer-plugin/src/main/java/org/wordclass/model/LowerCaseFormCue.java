@@ -1,5 +1,9 @@
 package org.wordclass.model;
 
+import java.io.IOException;
+import org.apache.lucene.store.DataInput;
+import org.apache.lucene.store.DataOutput;
+
 /**
  * What the lower-case form of an unknown capitalised word says about its tag: "Customer" is
  * unknown, but "customer" is a known noun, and capitalised words whose lower-case form is mostly
@@ -107,6 +111,27 @@ public final class LowerCaseFormCue {
 
   double[] factors() {
     return factors;
+  }
+
+  /**
+   * Writes the cue in the model file's layout ({@code docs/model-format.md}): the state priors,
+   * then the factors row by row. Whether a model has the cue at all is the unknown-word model's
+   * flag byte, written before.
+   */
+  void writeTo(DataOutput out) throws IOException {
+    ModelFile.writeDoubles(out, logStatePrior);
+    ModelFile.writeDoubles(out, factors);
+  }
+
+  /**
+   * Reads a cue {@link #writeTo} wrote, checking both sizes against the bytes left before
+   * allocating; the constructor checks the values.
+   */
+  static LowerCaseFormCue readFrom(DataInput in, ModelFile.Limits limits, int tagCount, int openCount, Lexicon lexicon,
+      StateSpace states) throws IOException {
+    double[] logStatePrior = ModelFile.readDoubles(in, limits.count(states.size(), 8, "state priors"));
+    double[] factors = ModelFile.readDoubles(in, limits.count((long) tagCount * openCount, 8, "lower-case form factors"));
+    return new LowerCaseFormCue(logStatePrior, factors, tagCount, openCount, lexicon, states);
   }
 
   /** The lower-case words and their tags. */

@@ -101,7 +101,7 @@ public final class ModelFile {
     }
   }
 
-  private static void writeDoubles(DataOutput out, double[] values) throws IOException {
+  static void writeDoubles(DataOutput out, double[] values) throws IOException {
     for (double v : values) {
       out.writeLong(Double.doubleToLongBits(v));
     }
@@ -135,8 +135,7 @@ public final class ModelFile {
     LowerCaseFormCue cue = model.lowerCaseForms();
     out.writeByte((byte) (cue == null ? 0 : 1));
     if (cue != null) {
-      writeDoubles(out, cue.logStatePrior());
-      writeDoubles(out, cue.factors());
+      cue.writeTo(out);
     }
     out.writeVInt(model.maxBeginningLength());
     if (model.maxBeginningLength() > 0) {
@@ -331,7 +330,7 @@ public final class ModelFile {
     return values;
   }
 
-  private static double[] readDoubles(DataInput in, int count) throws IOException {
+  static double[] readDoubles(DataInput in, int count) throws IOException {
     double[] values = new double[count];
     for (int i = 0; i < count; i++) {
       values[i] = Double.longBitsToDouble(in.readLong());
@@ -371,9 +370,7 @@ public final class ModelFile {
     }
     LowerCaseFormCue cue = null;
     if (version >= VERSION_CAPITALISED_PRIORS && in.readByte() != 0) {
-      double[] logStatePrior = readDoubles(in, limits.count(states.size(), 8, "state priors"));
-      double[] factors = readDoubles(in, limits.count((long) tagCount * openCount, 8, "lower-case form factors"));
-      cue = new LowerCaseFormCue(logStatePrior, factors, tagCount, openCount, lexicon, states);
+      cue = LowerCaseFormCue.readFrom(in, limits, tagCount, openCount, lexicon, states);
     }
     int maxBeginning = version >= VERSION_CAPITALISED_PRIORS ? vInt(in) : 0;
     AffixTrie[] beginningTries = null;
