@@ -89,7 +89,7 @@ public final class ModelFile {
     writeFloats(out, model.logBigramTable());
     writeFloats(out, model.logTrigramTable());
     model.lexicon().writeTo(out);
-    writeUnknownWords(out, model.unknownWords(), tags.size());
+    model.unknownWords().writeTo(out);
     CodecUtil.writeFooter(out);
   }
 
@@ -111,37 +111,6 @@ public final class ModelFile {
   private static void writeFloats(DataOutput out, double[] values) throws IOException {
     for (double v : values) {
       out.writeInt(Float.floatToIntBits((float) v));
-    }
-  }
-
-  private static void writeUnknownWords(DataOutput out, UnknownWordModel model, int tagCount) throws IOException {
-    out.writeLong(Double.doubleToLongBits(model.theta()));
-    out.writeVInt(model.maxEndingLength());
-    int[] open = model.openTags();
-    out.writeVInt(open.length);
-    for (int t : open) {
-      out.writeVInt(t);
-    }
-    writeDoubles(out, model.logPrior());
-    writeDoubles(out, model.logPriorCapitalised());
-    writeDoubles(out, model.baseDistribution());
-    for (int t : model.trieOfShape()) {
-      out.writeVInt(t);
-    }
-    out.writeVInt(model.endingTries().length);
-    for (AffixTrie trie : model.endingTries()) {
-      trie.writeTo(out);
-    }
-    LowerCaseFormCue cue = model.lowerCaseForms();
-    out.writeByte((byte) (cue == null ? 0 : 1));
-    if (cue != null) {
-      cue.writeTo(out);
-    }
-    out.writeVInt(model.maxBeginningLength());
-    if (model.maxBeginningLength() > 0) {
-      for (AffixTrie trie : model.beginningTries()) {
-        trie.writeTo(out);
-      }
     }
   }
 
@@ -268,7 +237,7 @@ public final class ModelFile {
     double[] logBigram = readFloats(in, limits.count(n * n, 4, "bigram entries"));
     double[] logTrigram = readFloats(in, limits.count(n * n * n, 4, "trigram entries"));
     Lexicon lexicon = Lexicon.readFrom(in, limits, states.size());
-    UnknownWordModel unknown = readUnknownWords(in, limits, tagCount, version, lexicon, states);
+    UnknownWordModel unknown = UnknownWordModel.readFrom(in, limits, tagCount, version, lexicon, states);
     return new HmmModel(order, tags, states, cues, logBigram, logTrigram, lexicon, unknown, provenance);
   }
 
@@ -344,42 +313,4 @@ public final class ModelFile {
     }
     return tag;
   }
-
-  private static UnknownWordModel readUnknownWords(DataInput in, Limits limits, int tagCount, int version,
-      Lexicon lexicon, StateSpace states)
-      throws IOException {
-    double theta = Double.longBitsToDouble(in.readLong());
-    int maxEnding = vInt(in);
-    int openCount = limits.count(vInt(in), 1, "open tags");
-    int[] open = new int[openCount];
-    for (int i = 0; i < openCount; i++) {
-      open[i] = tagIndex(vInt(in), tagCount);
-    }
-    double[] logPrior = readDoubles(in, limits.count(tagCount, 8, "tag priors"));
-    double[] logPriorCapitalised = version >= VERSION_CAPITALISED_PRIORS
-        ? readDoubles(in, limits.count(tagCount, 8, "tag priors of capitalised words")) : logPrior;
-    double[] base = readDoubles(in, limits.count(openCount, 8, "open-tag probabilities"));
-    int[] trieOfShape = new int[WordShape.values().length];
-    for (int i = 0; i < trieOfShape.length; i++) {
-      trieOfShape[i] = vInt(in);
-    }
-    int trieCount = limits.count(vInt(in), 1, "ending tries");
-    AffixTrie[] tries = new AffixTrie[trieCount];
-    for (int i = 0; i < trieCount; i++) {
-      tries[i] = AffixTrie.readFrom(in, limits, tagCount);
-    }
-    LowerCaseFormCue cue = null;
-    if (version >= VERSION_CAPITALISED_PRIORS && in.readByte() != 0) {
-      cue = LowerCaseFormCue.readFrom(in, limits, tagCount, openCount, lexicon, states);
-    }
-    int maxBeginning = version >= VERSION_CAPITALISED_PRIORS ? vInt(in) : 0;
-    AffixTrie[] beginningTries = null;
-    if (maxBeginning > 0) {
-      beginningTries = new AffixTrie[] {AffixTrie.readFrom(in, limits, tagCount), AffixTrie.readFrom(in, limits, tagCount)};
-    }
-    return UnknownWordModel.builder().theta(theta).openTags(open, base).logPriors(logPrior, logPriorCapitalised)
-        .endings(maxEnding, trieOfShape, tries).lowerCaseForms(cue).beginnings(maxBeginning, beginningTries).build();
-  }
-
-
 }

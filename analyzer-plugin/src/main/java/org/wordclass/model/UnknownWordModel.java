@@ -1,8 +1,11 @@
 package org.wordclass.model;
 
+import java.io.IOException;
 import java.lang.invoke.MethodHandles;
 import java.lang.invoke.VarHandle;
 import java.util.Arrays;
+import org.apache.lucene.store.DataInput;
+import org.apache.lucene.store.DataOutput;
 
 /**
  * Emission scores for words the lexicon does not hold, from their endings and spelling shape, in
@@ -466,6 +469,78 @@ public final class UnknownWordModel {
    */
   public AffixTrie[] beginningTries() {
     return beginningTries == null ? null : beginningTries.clone();
+  }
+
+  /**
+   * Writes the model in the model file's layout ({@code docs/model-format.md}): θ, the open tags,
+   * both prior rows, the base distribution, the tries of endings, the lower-case form cue behind
+   * a flag byte, then the longest beginning and, if positive, the two tries of beginnings.
+   */
+  void writeTo(DataOutput out) throws IOException {
+    out.writeLong(Double.doubleToLongBits(theta));
+    out.writeVInt(maxEndingLength);
+    out.writeVInt(openTags.length);
+    for (int t : openTags) {
+      out.writeVInt(t);
+    }
+    ModelFile.writeDoubles(out, logPrior);
+    ModelFile.writeDoubles(out, logPriorCapitalised);
+    ModelFile.writeDoubles(out, baseDistribution);
+    for (int t : trieOfShape) {
+      out.writeVInt(t);
+    }
+    out.writeVInt(endingTries.length);
+    for (AffixTrie trie : endingTries) {
+      trie.writeTo(out);
+    }
+    out.writeByte((byte) (lowerCaseForms == null ? 0 : 1));
+    if (lowerCaseForms != null) {
+      lowerCaseForms.writeTo(out);
+    }
+    out.writeVInt(maxBeginningLength);
+    if (maxBeginningLength > 0) {
+      for (AffixTrie trie : beginningTries) {
+        trie.writeTo(out);
+      }
+    }
+  }
+
+  /**
+   * Reads a model {@link #writeTo} wrote in format {@code version}, checking every declared size
+   * against the bytes left before allocating and every tag against {@code tagCount}. Before
+   * {@link ModelFile#VERSION_CAPITALISED_PRIORS} a file has one prior row, which then serves
+   * both, and neither lower-case forms nor beginnings. The lower-case form cue looks its words up
+   * in {@code lexicon}, over {@code states}.
+   */
+  static UnknownWordModel readFrom(DataInput in, ModelFile.Limits limits, int tagCount, int version, Lexicon lexicon,
+      StateSpace states) throws IOException {
+    boolean fromVersion2 = version >= ModelFile.VERSION_CAPITALISED_PRIORS;
+    double theta = Double.longBitsToDouble(in.readLong());
+    int maxEnding = ModelFile.vInt(in);
+    int openCount = limits.count(ModelFile.vInt(in), 1, "open tags");
+    int[] open = new int[openCount];
+    for (int i = 0; i < openCount; i++) {
+      open[i] = ModelFile.tagIndex(ModelFile.vInt(in), tagCount);
+    }
+    double[] logPrior = ModelFile.readDoubles(in, limits.count(tagCount, 8, "tag priors"));
+    double[] logPriorCapitalised = fromVersion2
+        ? ModelFile.readDoubles(in, limits.count(tagCount, 8, "tag priors of capitalised words")) : logPrior;
+    double[] base = ModelFile.readDoubles(in, limits.count(openCount, 8, "open-tag probabilities"));
+    int[] trieOfShape = new int[WordShape.values().length];
+    for (int i = 0; i < trieOfShape.length; i++) {
+      trieOfShape[i] = ModelFile.vInt(in);
+    }
+    AffixTrie[] tries = new AffixTrie[limits.count(ModelFile.vInt(in), 1, "ending tries")];
+    for (int i = 0; i < tries.length; i++) {
+      tries[i] = AffixTrie.readFrom(in, limits, tagCount);
+    }
+    LowerCaseFormCue cue = fromVersion2 && in.readByte() != 0
+        ? LowerCaseFormCue.readFrom(in, limits, tagCount, openCount, lexicon, states) : null;
+    int maxBeginning = fromVersion2 ? ModelFile.vInt(in) : 0;
+    AffixTrie[] beginningTries = maxBeginning > 0
+        ? new AffixTrie[] {AffixTrie.readFrom(in, limits, tagCount), AffixTrie.readFrom(in, limits, tagCount)} : null;
+    return builder().theta(theta).openTags(open, base).logPriors(logPrior, logPriorCapitalised)
+        .endings(maxEnding, trieOfShape, tries).lowerCaseForms(cue).beginnings(maxBeginning, beginningTries).build();
   }
 
   /** The cue of the lower-case forms of capitalised words, or null if the model has none. */
