@@ -92,6 +92,40 @@ public final class HmmModel {
     }
   }
 
+  /**
+   * The two transition tables as the model file holds them ({@code docs/model-format.md}): the
+   * bigram table, then the trigram table, each value a float32, since tables are kept at float
+   * precision and floats lose nothing.
+   */
+  record Transitions(double[] logBigram, double[] logTrigram) {
+    void writeTo(DataOutput out) throws IOException {
+      writeFloats(out, logBigram);
+      writeFloats(out, logTrigram);
+    }
+
+    /** Reads tables {@link #writeTo} wrote for {@code stateCount} states and the boundary, both sizes checked against the bytes left. */
+    static Transitions readFrom(DataInput in, ModelFile.Limits limits, int stateCount) throws IOException {
+      long n = stateCount + 1;
+      double[] logBigram = readFloats(in, limits.count(n * n, 4, "bigram entries"));
+      double[] logTrigram = readFloats(in, limits.count(n * n * n, 4, "trigram entries"));
+      return new Transitions(logBigram, logTrigram);
+    }
+
+    private static void writeFloats(DataOutput out, double[] values) throws IOException {
+      for (double v : values) {
+        out.writeInt(Float.floatToIntBits((float) v));
+      }
+    }
+
+    private static double[] readFloats(DataInput in, int count) throws IOException {
+      double[] values = new double[count];
+      for (int i = 0; i < count; i++) {
+        values[i] = Float.intBitsToFloat(in.readInt());
+      }
+      return values;
+    }
+  }
+
   /** A model with one state per tag and no extra cues. */
   public HmmModel(
       int order,
@@ -223,6 +257,11 @@ public final class HmmModel {
   /** {@code log P(next | first, previous)}. */
   public double logTrigram(int first, int previous, int next) {
     return logTrigram[trigramIndex(first, previous, next)];
+  }
+
+  /** Both transition tables, for the model file. */
+  Transitions transitions() {
+    return new Transitions(logBigram, logTrigram);
   }
 
   /** The whole bigram log table; callers must not modify it. */

@@ -86,8 +86,7 @@ public final class ModelFile {
     StateSpace states = model.states();
     states.writeTo(out);
     model.cues().writeTo(out);
-    writeFloats(out, model.logBigramTable());
-    writeFloats(out, model.logTrigramTable());
+    model.transitions().writeTo(out);
     model.lexicon().writeTo(out);
     model.unknownWords().writeTo(out);
     CodecUtil.writeFooter(out);
@@ -104,13 +103,6 @@ public final class ModelFile {
   static void writeDoubles(DataOutput out, double[] values) throws IOException {
     for (double v : values) {
       out.writeLong(Double.doubleToLongBits(v));
-    }
-  }
-
-  /** Tables are kept in memory at float precision (see HmmModel), so floats lose nothing. */
-  private static void writeFloats(DataOutput out, double[] values) throws IOException {
-    for (double v : values) {
-      out.writeInt(Float.floatToIntBits((float) v));
     }
   }
 
@@ -233,12 +225,11 @@ public final class ModelFile {
     int tagCount = tags.size();
     StateSpace states = StateSpace.readFrom(in, limits, tagCount);
     HmmModel.DecodingCues cues = HmmModel.DecodingCues.readFrom(in, limits, version);
-    long n = states.size() + 1;
-    double[] logBigram = readFloats(in, limits.count(n * n, 4, "bigram entries"));
-    double[] logTrigram = readFloats(in, limits.count(n * n * n, 4, "trigram entries"));
+    HmmModel.Transitions transitions = HmmModel.Transitions.readFrom(in, limits, states.size());
     Lexicon lexicon = Lexicon.readFrom(in, limits, states.size());
     UnknownWordModel unknown = UnknownWordModel.readFrom(in, limits, tagCount, version, lexicon, states);
-    return new HmmModel(order, tags, states, cues, logBigram, logTrigram, lexicon, unknown, provenance);
+    return new HmmModel(order, tags, states, cues, transitions.logBigram(), transitions.logTrigram(), lexicon, unknown,
+        provenance);
   }
 
   /** Checks declared sizes against the bytes left in the file before anything is allocated. */
@@ -289,14 +280,6 @@ public final class ModelFile {
       throw new IOException("a vInt of more than 32 bits");
     }
     return value | (last << 28);
-  }
-
-  private static double[] readFloats(DataInput in, int count) throws IOException {
-    double[] values = new double[count];
-    for (int i = 0; i < count; i++) {
-      values[i] = Float.intBitsToFloat(in.readInt());
-    }
-    return values;
   }
 
   static double[] readDoubles(DataInput in, int count) throws IOException {
