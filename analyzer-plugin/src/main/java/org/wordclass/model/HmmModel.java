@@ -311,6 +311,28 @@ public final class HmmModel {
     return provenance;
   }
 
+  /**
+   * Writes the provenance in the model file's layout ({@code docs/model-format.md}): the number
+   * of entries, then each key and value, in key order, so the same model gives the same bytes.
+   */
+  void writeProvenanceTo(DataOutput out) throws IOException {
+    out.writeVInt(provenance.size());
+    for (Map.Entry<String, String> e : provenance.entrySet()) {
+      out.writeString(e.getKey());
+      out.writeString(e.getValue());
+    }
+  }
+
+  /** Reads provenance {@link #writeProvenanceTo} wrote, its size checked against the bytes left before anything is read. */
+  static SortedMap<String, String> readProvenance(DataInput in, ModelFile.Limits limits) throws IOException {
+    int size = limits.count(ModelFile.vInt(in), 2, "provenance entries");
+    SortedMap<String, String> map = new TreeMap<>();
+    for (int i = 0; i < size; i++) {
+      map.put(limits.string(), limits.string());
+    }
+    return map;
+  }
+
   /** Prefix of the provenance entries a model's builder added by hand (its name, licence, source). */
   public static final String NOTE_PREFIX = "note.";
 

@@ -79,7 +79,7 @@ public final class ModelFile {
   /** Writes {@code model} to {@code out}, header to footer. */
   public static void write(HmmModel model, IndexOutput out) throws IOException {
     CodecUtil.writeHeader(out, CODEC, VERSION_CURRENT);
-    writeMap(out, model.provenance());
+    model.writeProvenanceTo(out);
     out.writeByte((byte) model.order());
     TagSet tags = model.tags();
     tags.writeTo(out);
@@ -90,14 +90,6 @@ public final class ModelFile {
     model.lexicon().writeTo(out);
     model.unknownWords().writeTo(out);
     CodecUtil.writeFooter(out);
-  }
-
-  private static void writeMap(DataOutput out, Map<String, String> map) throws IOException {
-    out.writeVInt(map.size());
-    for (Map.Entry<String, String> e : new TreeMap<>(map).entrySet()) {
-      out.writeString(e.getKey());
-      out.writeString(e.getValue());
-    }
   }
 
   static void writeDoubles(DataOutput out, double[] values) throws IOException {
@@ -219,7 +211,7 @@ public final class ModelFile {
 
   private static HmmModel readBody(ChecksumIndexInput in, int version, String name) throws IOException {
     Limits limits = new Limits(in, name);
-    Map<String, String> provenance = readMap(in, limits);
+    Map<String, String> provenance = HmmModel.readProvenance(in, limits);
     int order = in.readByte();
     TagSet tags = TagSet.readFrom(in, limits);
     int tagCount = tags.size();
@@ -250,15 +242,6 @@ public final class ModelFile {
       in.readBytes(bytes, 0, length);
       return new String(bytes, StandardCharsets.UTF_8);
     }
-  }
-
-  private static Map<String, String> readMap(DataInput in, Limits limits) throws IOException {
-    int size = limits.count(vInt(in), 2, "provenance entries");
-    Map<String, String> map = new TreeMap<>();
-    for (int i = 0; i < size; i++) {
-      map.put(limits.string(), limits.string());
-    }
-    return map;
   }
 
   /**
