@@ -8,11 +8,9 @@ import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.nio.file.attribute.BasicFileAttributes;
-import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.List;
 import java.util.Map;
-import java.util.TreeMap;
 import org.apache.lucene.codecs.CodecUtil;
 import org.apache.lucene.index.CorruptIndexException;
 import org.apache.lucene.index.IndexFormatTooNewException;
@@ -27,13 +25,17 @@ import org.apache.lucene.store.DataOutput;
 import org.apache.lucene.store.IndexInput;
 import org.apache.lucene.store.IndexOutput;
 import org.apache.lucene.store.OutputStreamIndexOutput;
-import org.apache.lucene.util.IOUtils;
 
 /**
  * Reads and writes the model file format ({@code .wcm}), described in {@code docs/model-format.md}:
  * a Lucene {@link CodecUtil} header naming the format and its version, the provenance block,
  * the tag set, the transition tables, the lexicon and the unknown-word model, then a footer with
- * a CRC-32 checksum of everything before it.
+ * a CRC-32 checksum of everything before it. This class sequences header, components and footer;
+ * each component writes and reads its own fields ({@code writeTo} and {@code readFrom} on
+ * {@link TagSet}, {@link StateSpace}, {@link HmmModel.DecodingCues}, the transition tables,
+ * {@link Lexicon}, {@link UnknownWordModel} with its {@link AffixTrie}s and
+ * {@link LowerCaseFormCue}, and the provenance on {@link HmmModel}), checking its sizes with
+ * {@link Limits}.
  *
  * <p>Loading verifies the header first (so a foreign or newer file is named as such), then the
  * checksum of the whole file (so a changed or truncated byte is caught before any parsing), then
@@ -81,10 +83,8 @@ public final class ModelFile {
     CodecUtil.writeHeader(out, CODEC, VERSION_CURRENT);
     model.writeProvenanceTo(out);
     out.writeByte((byte) model.order());
-    TagSet tags = model.tags();
-    tags.writeTo(out);
-    StateSpace states = model.states();
-    states.writeTo(out);
+    model.tags().writeTo(out);
+    model.states().writeTo(out);
     model.cues().writeTo(out);
     model.transitions().writeTo(out);
     model.lexicon().writeTo(out);
@@ -214,12 +214,11 @@ public final class ModelFile {
     Map<String, String> provenance = HmmModel.readProvenance(in, limits);
     int order = in.readByte();
     TagSet tags = TagSet.readFrom(in, limits);
-    int tagCount = tags.size();
-    StateSpace states = StateSpace.readFrom(in, limits, tagCount);
+    StateSpace states = StateSpace.readFrom(in, limits, tags.size());
     HmmModel.DecodingCues cues = HmmModel.DecodingCues.readFrom(in, limits, version);
     HmmModel.Transitions transitions = HmmModel.Transitions.readFrom(in, limits, states.size());
     Lexicon lexicon = Lexicon.readFrom(in, limits, states.size());
-    UnknownWordModel unknown = UnknownWordModel.readFrom(in, limits, tagCount, version, lexicon, states);
+    UnknownWordModel unknown = UnknownWordModel.readFrom(in, limits, tags.size(), version, lexicon, states);
     return new HmmModel(order, tags, states, cues, transitions.logBigram(), transitions.logTrigram(), lexicon, unknown,
         provenance);
   }
