@@ -44,11 +44,10 @@ public final class Decoder {
   private double[] posterior = new double[256];
   private double[] betaSum = new double[64];
   /**
-   * Per candidate h two positions back, while a position is decoded: the offset of its plane in
-   * the trigram table, and the score of (h, j) for the j at hand.
+   * Per predecessor h while a position is decoded (a candidate of the position before at order
+   * 1, two before at order 2): the offset of its row or plane in the transition table.
    */
   private int[] planeOf = new int[16];
-  private double[] column = new double[16];
   private double bestLogProbability;
   private double lastLogLikelihood = Double.NEGATIVE_INFINITY;
   private double maxEmissionSum;
@@ -125,11 +124,7 @@ public final class Decoder {
       return;
     }
     layOutStates();
-    if (order == 2) {
-      viterbiSecondOrder(best, n);
-    } else {
-      viterbiFirstOrder(best, n);
-    }
+    viterbiOverCells(best, n);
   }
 
   /** Log joint probability of the sequence found by the last {@link #viterbi} call. */
@@ -137,111 +132,75 @@ public final class Decoder {
     return bestLogProbability;
   }
 
-  private void viterbiFirstOrder(int[] best, int n) {
+  /**
+   * Viterbi at either order as one first-order kernel over the trellis's cells: at order 1 a cell
+   * is a candidate k and its predecessors are the candidates j before it; at order 2 a cell is a
+   * pair (j, k) and its predecessors are the pairs (h, j) of the position before, so the same
+   * loop runs with the transition read from the trigram table. The emission of a cell follows
+   * the predecessor at order 1 (context rows by the previous candidate) and the row j at order 2.
+   * Sums are (score + transition) + emission in both cases, as in the kernels it replaces.
+   */
+  private void viterbiOverCells(int[] best, int n) {
     double[] emissions = lattice.pairLogEmissions();
     int[] current = lattice.candidateStates();
+    boolean pairs = order == 2;
+    float[] transition = pairs ? logTrigram : logBigram;
+    int plane = pairs ? states * states : states;
     for (int i = 0; i < n; i++) {
-      int kp = trellis.count(i - 1);
-      int kc = trellis.count(i);
-      int here = trellis.start(i);
-      double[] prevScore = i == 0 ? START_SCORE : score;
-      int prev = trellis.start(i - 1);
-      int[] previous = trellis.statesAt(i - 1);
-      int po = trellis.statesFrom(i - 1);
-      int co = lattice.candidateOffset(i);
-      int emit = trellis.emissionStart(i);
-      int stride = trellis.emissionStride(i);
-      for (int k = 0; k < kc; k++) {
-        int tk = current[co + k];
-        double top = Double.NEGATIVE_INFINITY;
-        int arg = 0;
-        for (int j = 0; j < kp; j++) {
-          double s = prevScore[prev + j] + logBigram[previous[po + j] * states + tk] + emissions[emit + j * stride + k];
-          if (s > top) {
-            top = s;
-            arg = j;
-          }
-        }
-        score[here + k] = top;
-        backPointer[here + k] = arg;
+      // the predecessors of a cell: kh of them, a step of predStep apart in the cells of i - 1
+      int back = pairs ? 2 : 1;
+      int kh = trellis.count(i - back);
+      if (planeOf.length < kh) {
+        planeOf = new int[kh];
       }
-    }
-    int last = trellis.start(n - 1);
-    double top = Double.NEGATIVE_INFINITY;
-    int arg = 0;
-    for (int k = 0; k < trellis.count(n - 1); k++) {
-      double s = score[last + k] + logBigram[trellis.stateAt(n - 1, k) * states + boundary];
-      if (s > top) {
-        top = s;
-        arg = k;
-      }
-    }
-    bestLogProbability = top;
-    for (int i = n - 1; i >= 0; i--) {
-      best[i] = arg;
-      arg = backPointer[trellis.start(i) + arg];
-    }
-  }
-
-  private void viterbiSecondOrder(int[] best, int n) {
-    double[] emissions = lattice.pairLogEmissions();
-    int[] current = lattice.candidateStates();
-    int plane = states * states;
-    for (int i = 0; i < n; i++) {
-      int kpp = trellis.count(i - 2);
-      if (planeOf.length < kpp) {
-        planeOf = new int[kpp];
-        column = new double[kpp];
-      }
-      int kp = trellis.count(i - 1);
-      int kc = trellis.count(i);
-      int here = trellis.start(i);
-      double[] prevScore = i == 0 ? START_SCORE : score;
-      int prev = trellis.start(i - 1);
-      int prevRow = trellis.stride(i - 1);
-      int row = trellis.stride(i);
-      int[] first = trellis.statesAt(i - 2);
-      int fo = trellis.statesFrom(i - 2);
-      int[] previous = trellis.statesAt(i - 1);
-      int po = trellis.statesFrom(i - 1);
-      int co = lattice.candidateOffset(i);
-      int emit = trellis.emissionStart(i);
-      int stride = trellis.emissionStride(i);
-      for (int h = 0; h < kpp; h++) {
+      int[] first = trellis.statesAt(i - back);
+      int fo = trellis.statesFrom(i - back);
+      for (int h = 0; h < kh; h++) {
         planeOf[h] = first[fo + h] * plane;
       }
-      for (int j = 0; j < kp; j++) {
-        int tj = previous[po + j];
-        // the scores of (h, j) for every h, gathered once for all k
-        for (int h = 0; h < kpp; h++) {
-          column[h] = prevScore[prev + h * prevRow + j];
-        }
+      int rows = pairs ? trellis.count(i - 1) : 1;
+      int predStep = pairs ? trellis.stride(i - 1) : 1;
+      int[] previous = trellis.statesAt(i - 1);
+      int po = trellis.statesFrom(i - 1);
+      double[] prevScore = i == 0 ? START_SCORE : score;
+      int prev = trellis.start(i - 1);
+      int here = trellis.start(i);
+      int row = trellis.stride(i);
+      int kc = trellis.count(i);
+      int co = lattice.candidateOffset(i);
+      int emit = trellis.emissionStart(i);
+      int stride = trellis.emissionStride(i);
+      int emitByPred = pairs ? 0 : stride;
+      for (int j = 0; j < rows; j++) {
+        int lead = pairs ? previous[po + j] * states : 0;
+        int emitted = emit + (pairs ? j * stride : 0);
         int cell = here + j * row;
-        int emitted = emit + j * stride;
         for (int k = 0; k < kc; k++) {
-          // (th * states + tj) * states + tk, with the part that does not depend on h taken out
-          int last = tj * states + current[co + k];
-          // only the best score here; which h gave it is found again when tracing back, so
-          // nothing is stored per comparison
+          int last = lead + current[co + k];
           double top = Double.NEGATIVE_INFINITY;
-          for (int h = 0; h < kpp; h++) {
-            double s = column[h] + logTrigram[planeOf[h] + last];
-            top = s > top ? s : top;
+          int arg = 0;
+          for (int h = 0; h < kh; h++) {
+            double s = prevScore[prev + h * predStep + j] + transition[planeOf[h] + last] + emissions[emitted + h * emitByPred + k];
+            if (s > top) {
+              top = s;
+              arg = h;
+            }
           }
-          score[cell + k] = top + emissions[emitted + k];
+          score[cell + k] = top;
+          backPointer[cell + k] = arg;
         }
       }
     }
-    int kp = trellis.count(n - 2);
-    int kc = trellis.count(n - 1);
     int last = trellis.start(n - 1);
+    int lastRows = pairs ? trellis.count(n - 2) : 1;
     int lastRow = trellis.stride(n - 1);
     double top = Double.NEGATIVE_INFINITY;
     int argJ = 0;
     int argK = 0;
-    for (int j = 0; j < kp; j++) {
-      for (int k = 0; k < kc; k++) {
-        double s = score[last + j * lastRow + k] + logTrigram[(trellis.stateAt(n - 2, j) * states + trellis.stateAt(n - 1, k)) * states + boundary];
+    for (int j = 0; j < lastRows; j++) {
+      int lead = pairs ? trellis.stateAt(n - 2, j) * states * states : 0;
+      for (int k = 0; k < trellis.count(n - 1); k++) {
+        double s = score[last + j * lastRow + k] + transition[lead + trellis.stateAt(n - 1, k) * states + boundary];
         if (s > top) {
           top = s;
           argJ = j;
@@ -254,34 +213,15 @@ public final class Decoder {
     int k = argK;
     for (int i = n - 1; i >= 0; i--) {
       best[i] = k;
-      int h = bestBefore(i, j, k);
-      k = j;
-      j = h;
-    }
-  }
-
-  /**
-   * The candidate h of position {@code i - 2} on the best path to (j at i - 1, k at i): the first
-   * h whose score plus transition equals the best, computed exactly as the forward pass did.
-   */
-  private int bestBefore(int i, int j, int k) {
-    int kpp = trellis.count(i - 2);
-    if (kpp == 1) {
-      return 0;
-    }
-    int prev = trellis.start(i - 1);
-    int prevRow = trellis.stride(i - 1);
-    int last = trellis.stateAt(i - 1, j) * states + trellis.stateAt(i, k);
-    double top = Double.NEGATIVE_INFINITY;
-    int arg = 0;
-    for (int h = 0; h < kpp; h++) {
-      double s = score[prev + h * prevRow + j] + logTrigram[trellis.stateAt(i - 2, h) * states * states + last];
-      if (s > top) {
-        top = s;
-        arg = h;
+      int h = backPointer[trellis.cell(i, j, k)];
+      // at order 2 the predecessor (h, j) becomes the cell (j', k') = (h, j); at order 1 h is k
+      if (pairs) {
+        k = j;
+        j = h;
+      } else {
+        k = h;
       }
     }
-    return arg;
   }
 
   /**

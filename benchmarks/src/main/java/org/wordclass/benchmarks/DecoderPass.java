@@ -8,8 +8,8 @@ import org.wordclass.decoding.Lattice;
 import org.wordclass.model.DefaultModel;
 
 /**
- * One pass of the decoder workload over the EWT test sentences with the bundled model at order 2,
- * timed in CPU time of the running thread and split into filling the lattices and filling them
+ * One pass of the decoder workload over the EWT test sentences with the bundled model at order 2
+ * (or the order named by {@code -Dwordclass.order}), timed in CPU time of the running thread and split into filling the lattices and filling them
  * plus Viterbi. {@link SideBySide} loads this class from each build it compares, each in a class
  * loader of its own, so that every build decodes with its own code and its own bundled model.
  */
@@ -25,7 +25,8 @@ public final class DecoderPass {
   /** Reads the sentences and loads the model; call once before {@link #pass}. */
   public static void prepare() {
     sentences = Ewt.testTokens();
-    decoder = new Decoder(DefaultModel.get(), 2);
+    // order 2 is the default; -Dwordclass.order=1 measures the first-order kernel
+    decoder = new Decoder(DefaultModel.get(), Integer.getInteger("wordclass.order", 2));
     best = new int[sentences.stream().mapToInt(s -> s.length).max().orElse(0)];
     tokens = Ewt.tokenCount(sentences);
   }
