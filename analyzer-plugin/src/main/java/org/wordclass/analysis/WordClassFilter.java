@@ -21,6 +21,7 @@ import org.wordclass.decoding.Decoder;
 import org.wordclass.decoding.Lattice;
 import org.wordclass.model.HmmModel;
 import org.wordclass.model.TagSet;
+import org.wordclass.model.Spelling;
 import org.wordclass.model.WordShape;
 
 /**
@@ -244,7 +245,7 @@ public final class WordClassFilter extends TokenFilter {
       int ending = lattice.matchedEndingLength(i);
       explanationAtt.setSource(source, null, new String(term, length - ending, ending), WordShape.classify(term, 0, length));
     } else {
-      String lookedUpAs = source == CandidateSource.LOWERCASED_FIRST_WORD ? Lattice.lowerCasedForm(term, 0, length) : null;
+      String lookedUpAs = source == CandidateSource.LOWERCASED_FIRST_WORD ? Spelling.lowerCase(new String(term, 0, length)) : null;
       explanationAtt.setSource(source, lookedUpAs, null, null);
     }
     decoder.tagPosteriors(i, explanationAtt.classProbabilities(tags.size()));

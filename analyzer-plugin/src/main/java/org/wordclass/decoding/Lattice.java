@@ -156,14 +156,6 @@ public final class Lattice {
     return true;
   }
 
-  /**
-   * The lower-case form a capitalised first word is looked up as ({@link
-   * CandidateSource#LOWERCASED_FIRST_WORD}); allocates, for explanations.
-   */
-  public static String lowerCasedForm(char[] buf, int off, int len) {
-    return Spelling.lowerCase(new String(buf, off, len));
-  }
-
   private int addKnown(int word, int flags, int tag, int start) {
     Lexicon lexicon = model.lexicon();
     int n = lexicon.stateCount(word);
