@@ -14,6 +14,7 @@ import org.apache.lucene.analysis.tokenattributes.CharTermAttribute;
 import org.apache.lucene.analysis.tokenattributes.OffsetAttribute;
 import org.apache.lucene.analysis.tokenattributes.SentenceAttribute;
 import org.wordclass.analysis.WordClassOptions;
+import org.wordclass.analysis.WrittenTogetherAttribute;
 
 /**
  * Runs raw text (a sentence, or a whole document as one field value) through a Lucene analysis
@@ -100,6 +101,8 @@ public final class AnalyzerAlignment {
       CharTermAttribute term = stream.addAttribute(CharTermAttribute.class);
       OffsetAttribute offset = stream.addAttribute(OffsetAttribute.class);
       SentenceAttribute sentenceAtt = stream.addAttribute(SentenceAttribute.class);
+      WrittenTogetherAttribute runAtt = stream.hasAttribute(WrittenTogetherAttribute.class)
+          ? stream.getAttribute(WrittenTogetherAttribute.class) : null;
       stream.reset();
       Piece piece = new Piece();
       int pieceSentence = 0;
@@ -134,7 +137,8 @@ public final class AnalyzerAlignment {
           tokensTaggedByALaterWord++;
         }
         if (c != Case.NO_WORD) {
-          piece.add(term.toString(), first, c == Case.SEVERAL_WORDS && host >= 0 ? host : first, start, end, field);
+          String gap = runAtt != null && runAtt.continuesRun() ? new String(runAtt.gapBuffer(), 0, runAtt.gapLength()) : null;
+          piece.add(term.toString(), gap, first, c == Case.SEVERAL_WORDS && host >= 0 ? host : first, start, end, field);
         }
       }
       stream.end();
@@ -256,12 +260,18 @@ public final class AnalyzerAlignment {
   private static final class Piece {
     final List<String> tokens = new ArrayList<>();
     final List<String> tags = new ArrayList<>();
+    final List<String> gaps = new ArrayList<>();
+    boolean hasRun;
     int emitted;
     int firstWord = -1;
     int start = -1;
     int end;
 
-    void add(String token, int word, int taggedBy, int tokenStart, int tokenEnd, FieldValue field) {
+    void add(String token, String gap, int word, int taggedBy, int tokenStart, int tokenEnd, FieldValue field) {
+      // a run cut by the window starts afresh, as in the filter
+      String kept = tokens.isEmpty() ? null : gap;
+      gaps.add(kept);
+      hasRun |= kept != null;
       tokens.add(token);
       tags.add(field.tags.get(taggedBy));
       if (firstWord < 0) {
@@ -280,7 +290,7 @@ public final class AnalyzerAlignment {
       Sentence origin = field.origin.get(firstWord);
       String text = field.text.substring(Math.min(start, end), end);
       out.add(new Sentence(List.copyOf(tokens), List.copyOf(tags), text, spaces, origin.file(), origin.line(), List.of(),
-          out.isEmpty()));
+          out.isEmpty(), hasRun ? gaps.toArray(String[]::new) : null));
     }
   }
 
