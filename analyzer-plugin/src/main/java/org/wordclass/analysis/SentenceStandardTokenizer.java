@@ -42,8 +42,15 @@ public final class SentenceStandardTokenizer extends Tokenizer {
   static final int LOOK_AHEAD = 64;
   /** Most characters of text kept behind the inner tokenizer's read position (it reads ahead up to 4,096). */
   static final int KEPT_TEXT = 16_384;
-  /** Characters that join two tokens into one run when the gap between them holds nothing else. */
-  static final String JOINERS = "/@:._=&?#%~+\\";
+  /**
+   * Characters that join two tokens into one run when the gap between them holds nothing else:
+   * chosen on UD English EWT dev (docs/accuracy.md, "Runs of tokens written together"). Left out
+   * because they cost accuracy there: the hyphen (EWT splits most hyphenated words into words of
+   * their own classes), the full stop (what the standard tokenizer leaves between two tokens is
+   * mostly a sentence end the break rules did not find) and the colon (mostly times and the
+   * {@code http} of an address, which decode as well apart).
+   */
+  static final String JOINERS = "/@_=&?#%~+\\";
   /** Longest gap that joins a run ({@code ://} is three); longer ones are punctuation of their own. */
   static final int MAX_GAP = 8;
 

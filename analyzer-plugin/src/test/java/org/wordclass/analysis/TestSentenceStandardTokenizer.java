@@ -169,17 +169,20 @@ public class TestSentenceStandardTokenizer extends BaseTokenStreamTestCase {
   }
 
   public void testRunsOfTokensWrittenTogether() throws IOException {
-    // invented text in the shapes EWT dev has (a URL with a path, an e-mail address, b/c, a date
-    // with slashes, a time); the tokens are the standard tokenizer's (tested above)
+    // invented text in the shapes EWT dev has (a path ending in a date, an e-mail address, b/c, a
+    // date with slashes, a query string); the tokens are the standard tokenizer's (tested above)
     assertEquals("see www.ferry.example [//]timetable [/]2005.09 today",
         runs("see www.ferry.example//timetable/2005.09 today"));
-    assertEquals("mail crew42 [@]ferry.example b [/]c 08 [/]16 [/]2000 at 10 [:]30",
-        runs("mail crew42@ferry.example b/c 08/16/2000 at 10:30"));
-    // whitespace, punctuation outside the joining set, or a sentence boundary end a run
-    assertEquals("ferry example b c one two", runs("ferry / example b, c one\n/two"));
-    assertEquals("ends here Next", runs("ends here./Next"));
-    // a run may not start a field
-    assertEquals("ferry", runs("//ferry"));
+    assertEquals("mail crew42 [@]ferry.example b [/]c 08 [/]16 [/]2000 or ferry.example [/]search q [=]rye [&]n [=]2",
+        runs("mail crew42@ferry.example b/c 08/16/2000 or ferry.example/search?q=rye&n=2"));
+    // the JDK's sentence rules end a sentence at that question mark, and a run never crosses one
+    assertEquals("search/0 q/1", sentences("search?q"));
+    // whitespace, characters outside the joining set (the hyphen, the colon, the full stop
+    // between two tokens: chosen on EWT dev), a sentence boundary end a run
+    assertEquals("ferry example b c one two long term at 10 30 2005 x",
+        runs("ferry / example b, c one\n/two long-term at 10:30 2005./x"));
+    // a run may not start a field; a gap longer than MAX_GAP is punctuation of its own
+    assertEquals("ferry ferry", runs("//ferry" + "/".repeat(SentenceStandardTokenizer.MAX_GAP + 1) + "ferry"));
   }
 
   public void testRunGapsMatchTheTextOnRandomText() throws IOException {
