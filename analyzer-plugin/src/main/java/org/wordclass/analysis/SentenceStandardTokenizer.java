@@ -30,7 +30,14 @@ import org.apache.lucene.util.AttributeFactory;
  * case; abbreviations are not known, so {@code Mr. Smith} is cut after {@code Mr}), or a line or
  * paragraph break (Unicode's sentence rules break there too; the JDK's rules do not).
  *
- * <p>Cost: the standard tokenizer's, plus copying each token's attributes once and, only where
+ * <p>It also marks, in the {@link WrittenTogetherAttribute}, a token written together with the one
+ * before it: the gap between them is not empty, holds at most {@value #MAX_GAP} characters, all
+ * of them {@linkplain #JOINERS joining characters} (slash, at sign and a few more; no whitespace),
+ * and no sentence boundary. The filter decodes such a run (pieces of a URL, an e-mail address, a
+ * path, a date) as one word, as the treebanks tag it.
+ *
+ * <p>Cost: the standard tokenizer's, plus a look at each gap between two tokens for the run mark
+ * (copied only where it joins), copying each token's attributes once and, only where
  * the gap between two tokens holds a full stop, a question or exclamation mark, a line break or a
  * character outside Latin-1, one sentence break test over the two tokens and a few dozen
  * characters after them. Memory is bounded: the text kept for those tests is the current and the

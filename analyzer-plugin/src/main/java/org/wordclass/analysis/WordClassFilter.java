@@ -62,6 +62,12 @@ import org.wordclass.model.WordShape;
  * token, exactly as if a sentence ended there. Tags near such a cut can differ from those of an
  * uncut decoding, since each side loses the context of the other.
  *
+ * <p>Where the tokenizer marks runs of tokens written together ({@link WrittenTogetherAttribute},
+ * set by {@link SentenceStandardTokenizer}: the pieces of a URL, an e-mail address, a path or a
+ * date), each run is decoded as one word, observed as its text as written (tokens and gaps), and
+ * all its tokens get that word's class, confidence and explanation. A run cut by the window
+ * starts afresh after the cut. Chains without the attribute decode token by token.
+ *
  * <h2>Where it belongs in a chain</h2>
  *
  * Right after the tokenizer, before lowercasing, stemming and stop words: capital letters and

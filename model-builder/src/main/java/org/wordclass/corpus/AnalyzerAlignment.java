@@ -38,6 +38,9 @@ import org.wordclass.analysis.WrittenTogetherAttribute;
  *       left out, counted.
  * </ul>
  *
+ * Tokens that continue a run written together ({@link WrittenTogetherAttribute}) carry their gap
+ * in {@link Sentence#gaps}, so that training can learn each run as one observation ({@link
+ * Sentence#runsJoined}) and evaluation decode it as the filter does while scoring every token.
  * Gold words that no token covers (punctuation a tokenizer drops) are counted too. A sentence
  * without raw text, or whose text does not match its forms, is an error naming file and line,
  * or is skipped and counted when skipping is allowed.
