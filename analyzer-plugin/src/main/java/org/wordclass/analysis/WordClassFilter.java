@@ -116,8 +116,9 @@ public final class WordClassFilter extends TokenFilter {
   /** Copies of buffered tokens; while {@link #carried}, {@code slots[windowSize]} holds the next window's first. */
   private AttributeSource[] slots = new AttributeSource[0];
   private CharTermAttribute[] slotTerms = new CharTermAttribute[0];
-  /** Per slot its run mark, when {@link #runAtt} is there. */
+  /** Per slot its run mark and position increment, when {@link #runAtt} is there. */
   private WrittenTogetherAttribute[] slotRuns = new WrittenTogetherAttribute[0];
+  private PositionIncrementAttribute[] slotPosIncs = new PositionIncrementAttribute[0];
   /**
    * This stream's attribute implementations and, per slot, their clones in the same order, so
    * that saving and restoring a token copies impl to impl directly; {@link
@@ -220,7 +221,7 @@ public final class WordClassFilter extends TokenFilter {
     positions.clear();
     for (int i = 0; i < size; i++) {
       CharTermAttribute term = slotTerms[i];
-      if (runAtt != null && slotRuns[i].continuesRun()) {
+      if (runAtt != null && continuesRun(i)) {
         WrittenTogetherAttribute run = slotRuns[i];
         positions.add(term.buffer(), 0, term.length(), run.gapBuffer(), 0, run.gapLength());
       } else {
@@ -233,6 +234,15 @@ public final class WordClassFilter extends TokenFilter {
     if (posteriors) {
       decoder.forwardBackward();
     }
+  }
+
+  /**
+   * Whether buffered token {@code i} continues the run of the token before it: marked so, and
+   * right after it (a filter upstream that removed a token in between, such as a stop filter,
+   * leaves a position gap, and the two were not written together).
+   */
+  private boolean continuesRun(int i) {
+    return slotRuns[i].continuesRun() && slotPosIncs[i].getPositionIncrement() == 1;
   }
 
   /** Restores buffered token {@code i} and sets its class. */
@@ -290,12 +300,14 @@ public final class WordClassFilter extends TokenFilter {
       slots = Arrays.copyOf(slots, grown);
       slotTerms = Arrays.copyOf(slotTerms, grown);
       slotRuns = Arrays.copyOf(slotRuns, grown);
+      slotPosIncs = Arrays.copyOf(slotPosIncs, grown);
       slotImpls = Arrays.copyOf(slotImpls, grown);
     }
     if (slots[i] == null) {
       slots[i] = cloneAttributes();
       slotTerms[i] = slots[i].getAttribute(CharTermAttribute.class);
       slotRuns[i] = runAtt == null ? null : slots[i].getAttribute(WrittenTogetherAttribute.class);
+      slotPosIncs[i] = runAtt == null ? null : slots[i].getAttribute(PositionIncrementAttribute.class);
       slotImpls[i] = impls(slots[i]);
     }
     AttributeImpl[] saved = slotImpls[i];
@@ -337,6 +349,9 @@ public final class WordClassFilter extends TokenFilter {
     WrittenTogetherAttribute run = slotRuns[a];
     slotRuns[a] = slotRuns[b];
     slotRuns[b] = run;
+    PositionIncrementAttribute posInc = slotPosIncs[a];
+    slotPosIncs[a] = slotPosIncs[b];
+    slotPosIncs[b] = posInc;
     AttributeImpl[] impls = slotImpls[a];
     slotImpls[a] = slotImpls[b];
     slotImpls[b] = impls;
@@ -365,6 +380,7 @@ public final class WordClassFilter extends TokenFilter {
       Arrays.fill(slots, null);
       Arrays.fill(slotTerms, null);
       Arrays.fill(slotRuns, null);
+      Arrays.fill(slotPosIncs, null);
       Arrays.fill(slotImpls, null);
       implCount = count;
       AttributeImpl[] kept = new AttributeImpl[count];

@@ -136,6 +136,32 @@ public class TestWordClassFilterRuns extends BaseTokenStreamTestCase {
     }
   }
 
+  /** A token removed between two pieces (a stop filter upstream) ends the run: they were not written together. */
+  public void testRemovedTokenEndsTheRun() throws IOException {
+    String text = "see ferry.example/the/timetable now"; // invented
+    Analyzer withStop = new Analyzer() {
+      @Override
+      protected TokenStreamComponents createComponents(String fieldName) {
+        Tokenizer tokenizer = new SentenceStandardTokenizer();
+        TokenStream stop = new org.apache.lucene.analysis.StopFilter(tokenizer,
+            org.apache.lucene.analysis.CharArraySet.copy(java.util.Set.of("the")));
+        return new TokenStreamComponents(tokenizer,
+            new WordClassFilter(stop, WordClassOptions.of(DefaultModel.get()).withConfidence(true)));
+      }
+    };
+    List<String> tokens = List.of("see", "ferry.example", "timetable", "now");
+    Tagger.Tagging apart = new Tagger(DefaultModel.get()).tag(tokens, true);
+    List<String[]> tagged = tagged(withStop, text);
+    withStop.close();
+    assertEquals(tokens.size(), tagged.size());
+    for (int i = 0; i < tokens.size(); i++) {
+      assertEquals(tokens.get(i), tagged.get(i)[0]);
+      assertEquals(tokens.get(i), DefaultModel.get().tags().name(apart.tags()[i]), tagged.get(i)[1]);
+      // a run would give both pieces one confidence; apart each has its own
+      assertEquals(tokens.get(i), Double.toString(apart.confidences()[i]), tagged.get(i)[2]);
+    }
+  }
+
   public void testRandomStringsWithRuns() throws IOException {
     WordClassOptions options = WordClassOptions.of(DefaultModel.get()).withConfidence(true).withExplain(true);
     try (Analyzer a = chain(true, options)) {

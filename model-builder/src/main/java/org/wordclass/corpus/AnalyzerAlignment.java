@@ -12,6 +12,7 @@ import org.apache.lucene.analysis.Analyzer;
 import org.apache.lucene.analysis.TokenStream;
 import org.apache.lucene.analysis.tokenattributes.CharTermAttribute;
 import org.apache.lucene.analysis.tokenattributes.OffsetAttribute;
+import org.apache.lucene.analysis.tokenattributes.PositionIncrementAttribute;
 import org.apache.lucene.analysis.tokenattributes.SentenceAttribute;
 import org.wordclass.analysis.WordClassOptions;
 import org.wordclass.analysis.WrittenTogetherAttribute;
@@ -104,6 +105,7 @@ public final class AnalyzerAlignment {
       CharTermAttribute term = stream.addAttribute(CharTermAttribute.class);
       OffsetAttribute offset = stream.addAttribute(OffsetAttribute.class);
       SentenceAttribute sentenceAtt = stream.addAttribute(SentenceAttribute.class);
+      PositionIncrementAttribute posInc = stream.addAttribute(PositionIncrementAttribute.class);
       WrittenTogetherAttribute runAtt = stream.hasAttribute(WrittenTogetherAttribute.class)
           ? stream.getAttribute(WrittenTogetherAttribute.class) : null;
       stream.reset();
@@ -140,7 +142,8 @@ public final class AnalyzerAlignment {
           tokensTaggedByALaterWord++;
         }
         if (c != Case.NO_WORD) {
-          String gap = runAtt != null && runAtt.continuesRun() ? new String(runAtt.gapBuffer(), 0, runAtt.gapLength()) : null;
+          // as the filter has it: a token removed in between ends the run
+          String gap = runAtt != null && runAtt.continuesRun() && posInc.getPositionIncrement() == 1 ? new String(runAtt.gapBuffer(), 0, runAtt.gapLength()) : null;
           piece.add(term.toString(), gap, first, c == Case.SEVERAL_WORDS && host >= 0 ? host : first, start, end, field);
         }
       }
