@@ -53,8 +53,8 @@ public final class SentenceStandardTokenizer extends Tokenizer {
    * Characters that join two tokens into one run when the gap between them holds nothing else:
    * chosen on UD English EWT dev (docs/accuracy.md, "Runs of tokens written together"). Left out
    * because they cost accuracy there: the hyphen (EWT splits most hyphenated words into words of
-   * their own classes), the full stop (what the standard tokenizer leaves between two tokens is
-   * mostly a sentence end the break rules did not find) and the colon (mostly times and the
+   * their own classes), the full stop (between two tokens mostly an ellipsis written without
+   * spaces, {@code house...is}; the standard tokenizer keeps {@code www.site.com} whole) and the colon (mostly times and the
    * {@code http} of an address, which decode as well apart).
    */
   static final String JOINERS = "/@_=&?#%~+\\";

@@ -268,12 +268,16 @@ public final class WordClassFilter extends TokenFilter {
     }
   }
 
-  /** Fills the explanation from lattice position {@code p}: the token's own, or that of the run it belongs to. */
+  /**
+   * Fills the explanation from lattice position {@code p}: of the token on its own, whose term is
+   * restored in {@link #termAtt}, or of the run it belongs to.
+   */
   private void explain(int p) {
     CandidateSource source = lattice.source(p);
-    char[] text = positions.text();
-    int start = positions.textStart(p);
-    int end = positions.textEnd(p);
+    boolean run = positions.isRun(p);
+    char[] text = run ? positions.text() : termAtt.buffer();
+    int start = run ? positions.runStart(p) : 0;
+    int end = run ? positions.runEnd(p) : termAtt.length();
     if (source == CandidateSource.UNKNOWN) {
       int ending = lattice.matchedEndingLength(p);
       explanationAtt.setSource(source, null, new String(text, end - ending, ending), WordShape.classify(text, start, end - start));

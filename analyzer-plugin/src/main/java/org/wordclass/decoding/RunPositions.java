@@ -5,25 +5,33 @@ import java.util.Arrays;
 /**
  * Fills a {@link Lattice} from tokens, one position per token, except that a run of tokens
  * written together (a URL, an e-mail address, a path or a date that the tokenizer cut at its
- * slashes, dots and at signs) becomes one position: observed as the run's text as written, the
- * tokens with the gaps between them, and looked up like any word (lexicon, else the unknown-word
- * model on its ending, where {@code .com}, {@code .pdf} or a year are telling). Every token of a
- * run then takes that position's class. Tokens given without a gap are each a position of their
- * own, exactly as if added to the lattice directly.
+ * slashes and at signs) becomes one position: observed as the run's text as written, the tokens
+ * with the gaps between them, and looked up like any word (lexicon, else the unknown-word model
+ * on its ending, where {@code .com}, {@code .pdf} or a year are telling). Every token of a run
+ * then takes that position's class. Tokens given without a gap are each a position of their own,
+ * exactly as if added to the lattice directly.
  *
- * <p>Cost: each token's characters, and its gap, are copied once into a buffer kept for the
- * positions' text (the explanation of an unknown word names its ending); no allocation in steady
- * state. Not thread-safe: one per lattice.
+ * <p>Cost: a token on its own is handed to the lattice from the caller's buffer, which must stay
+ * unchanged until {@link #finish}; only the tokens and gaps of runs are copied, into a buffer
+ * kept for the runs' text (the explanation of an unknown run names its ending). No allocation in
+ * steady state. Not thread-safe: one per lattice.
  */
 public final class RunPositions {
   private final Lattice lattice;
+  /** The text of the runs, one after the other. */
   private char[] text = new char[256];
   private int textLength;
-  /** Per position, where its text starts in {@link #text}; the entry after the last is the end. */
-  private int[] textStart = new int[65];
+  /** Per position, where its run's text starts in {@link #text}, or -1 for a token on its own. */
+  private int[] runStart = new int[64];
+  /** Per position, where its run's text ends. */
+  private int[] runEnd = new int[64];
   private int[] positionOf = new int[64];
   private int tokens;
   private int positions;
+  /** The last position's first token, until it is added to the lattice or copied into a run. */
+  private char[] pending;
+  private int pendingOffset;
+  private int pendingLength;
 
   public RunPositions(Lattice lattice) {
     this.lattice = lattice;
@@ -39,6 +47,7 @@ public final class RunPositions {
     tokens = 0;
     positions = 0;
     textLength = 0;
+    pending = null;
   }
 
   /** Adds a token that starts a position of its own. */
@@ -53,22 +62,34 @@ public final class RunPositions {
   public void add(char[] term, int offset, int length, char[] gap, int gapOffset, int gapLength) {
     if (gapLength == 0 || tokens == 0) {
       flush();
-      ensureCapacity(positions + 1);
-      textStart[positions++] = textLength;
+      if (positions == runStart.length) {
+        runStart = Arrays.copyOf(runStart, 2 * positions);
+        runEnd = Arrays.copyOf(runEnd, 2 * positions);
+      }
+      runStart[positions++] = -1;
+      pending = term;
+      pendingOffset = offset;
+      pendingLength = length;
     } else {
+      int p = positions - 1;
+      if (runStart[p] < 0) {
+        runStart[p] = textLength;
+        append(pending, pendingOffset, pendingLength);
+        pending = null;
+      }
       append(gap, gapOffset, gapLength);
+      append(term, offset, length);
+      runEnd[p] = textLength;
     }
-    append(term, offset, length);
     if (tokens == positionOf.length) {
       positionOf = Arrays.copyOf(positionOf, 2 * tokens);
     }
     positionOf[tokens++] = positions - 1;
   }
 
-  /** Adds the last run to the lattice: call after the last token, before decoding. */
+  /** Adds the last position to the lattice: call after the last token, before decoding. */
   public void finish() {
     flush();
-    textStart[positions] = textLength;
   }
 
   /** Number of tokens added. */
@@ -81,24 +102,35 @@ public final class RunPositions {
     return positionOf[token];
   }
 
-  /** The observed text of {@code position} is {@code text()[textStart(position)..textEnd(position))}. */
+  /** Whether {@code position} is a run of several tokens rather than a token on its own. */
+  public boolean isRun(int position) {
+    return runStart[position] >= 0;
+  }
+
+  /** The observed text of a run is {@code text()[runStart(position)..runEnd(position))}. */
   public char[] text() {
     return text;
   }
 
-  public int textStart(int position) {
-    return textStart[position];
+  public int runStart(int position) {
+    return runStart[position];
   }
 
-  public int textEnd(int position) {
-    return textStart[position + 1];
+  public int runEnd(int position) {
+    return runEnd[position];
   }
 
-  /** Adds the pending run, the positions' last, to the lattice. */
+  /** Adds the last position, if not yet added, to the lattice. */
   private void flush() {
-    if (lattice.size() < positions) {
-      int start = textStart[positions - 1];
-      lattice.add(text, start, textLength - start);
+    int p = positions - 1;
+    if (p < 0 || lattice.size() > p) {
+      return;
+    }
+    if (runStart[p] >= 0) {
+      lattice.add(text, runStart[p], runEnd[p] - runStart[p]);
+    } else {
+      lattice.add(pending, pendingOffset, pendingLength);
+      pending = null;
     }
   }
 
@@ -108,11 +140,5 @@ public final class RunPositions {
     }
     System.arraycopy(chars, offset, text, textLength, length);
     textLength += length;
-  }
-
-  private void ensureCapacity(int positionCount) {
-    if (positionCount + 1 > textStart.length) {
-      textStart = Arrays.copyOf(textStart, Math.max(positionCount + 1, 2 * textStart.length));
-    }
   }
 }
