@@ -60,10 +60,7 @@ final class TrainCommand extends BaseCommand {
     TagCounts counts = TagCounts.forOptions(options);
     try {
       // a run of tokens written together is one observation, as the filter decodes it
-      Consumer<Sentence> learn = s -> {
-        Sentence units = s.runsJoined();
-        counts.add(units.words(), units.tags());
-      };
+      Consumer<Sentence> learn = counts::add;
       Consumer<Sentence> throughChain = analysis.feeding(learn);
       progress.read(input, withTreebankTokens && analysis.enabled ? throughChain.andThen(learn) : throughChain);
       analysis.finish();
