@@ -30,7 +30,14 @@ import org.apache.lucene.util.AttributeFactory;
  * case; abbreviations are not known, so {@code Mr. Smith} is cut after {@code Mr}), or a line or
  * paragraph break (Unicode's sentence rules break there too; the JDK's rules do not).
  *
- * <p>Cost: the standard tokenizer's, plus copying each token's attributes once and, only where
+ * <p>It also marks, in the {@link WrittenTogetherAttribute}, a token written together with the one
+ * before it: the gap between them is not empty, holds at most {@value #MAX_GAP} characters, all
+ * of them {@linkplain #JOINERS joining characters} (slash, at sign and a few more; no whitespace),
+ * and no sentence boundary. The filter decodes such a run (pieces of a URL, an e-mail address, a
+ * path, a date) as one word, as the treebanks tag it.
+ *
+ * <p>Cost: the standard tokenizer's, plus a look at each gap between two tokens for the run mark
+ * (copied only where it joins), copying each token's attributes once and, only where
  * the gap between two tokens holds a full stop, a question or exclamation mark, a line break or a
  * character outside Latin-1, one sentence break test over the two tokens and a few dozen
  * characters after them. Memory is bounded: the text kept for those tests is the current and the
@@ -42,12 +49,24 @@ public final class SentenceStandardTokenizer extends Tokenizer {
   static final int LOOK_AHEAD = 64;
   /** Most characters of text kept behind the inner tokenizer's read position (it reads ahead up to 4,096). */
   static final int KEPT_TEXT = 16_384;
+  /**
+   * Characters that join two tokens into one run when the gap between them holds nothing else:
+   * chosen on UD English EWT dev (docs/accuracy.md, "Runs of tokens written together"). Left out
+   * because they cost accuracy there: the hyphen (EWT splits most hyphenated words into words of
+   * their own classes), the full stop (between two tokens mostly an ellipsis written without
+   * spaces, {@code house...is}; the standard tokenizer keeps {@code www.site.com} whole) and the colon (mostly times and the
+   * {@code http} of an address, which decode as well apart).
+   */
+  static final String JOINERS = "/@_=&?#%~+\\";
+  /** Longest gap that joins a run ({@code ://} is three); longer ones are punctuation of their own. */
+  static final int MAX_GAP = 8;
 
   private final CharTermAttribute termAtt = addAttribute(CharTermAttribute.class);
   private final OffsetAttribute offsetAtt = addAttribute(OffsetAttribute.class);
   private final PositionIncrementAttribute posIncAtt = addAttribute(PositionIncrementAttribute.class);
   private final TypeAttribute typeAtt = addAttribute(TypeAttribute.class);
   private final SentenceAttribute sentenceAtt = addAttribute(SentenceAttribute.class);
+  private final WrittenTogetherAttribute runAtt = addAttribute(WrittenTogetherAttribute.class);
 
   private final TextWindow text = new TextWindow();
   private final StandardTokenizer inner = new StandardTokenizer();
@@ -87,8 +106,16 @@ public final class SentenceStandardTokenizer extends Tokenizer {
     }
     int start = innerOffset.startOffset();
     int end = innerOffset.endOffset();
-    if (previousEnd >= 0 && sentenceStartsBetween(previousEnd, start, end)) {
-      sentence++;
+    int gap = 0;
+    if (previousEnd >= 0) {
+      if (sentenceStartsBetween(previousEnd, start, end)) {
+        sentence++;
+      } else {
+        gap = joiningGap(previousEnd, start);
+      }
+    }
+    if (gap > 0) {
+      runAtt.setGap(text.buffer(), text.indexOf(previousEnd), gap);
     }
     previousStart = start;
     previousEnd = end;
@@ -121,6 +148,23 @@ public final class SentenceStandardTokenizer extends Tokenizer {
     sentences.setText(window);
     int boundary = sentences.following(Math.max(0, gapStart - from));
     return boundary != BreakIterator.DONE && boundary <= tokenStart - from;
+  }
+
+  /**
+   * The length of the gap {@code [gapStart, tokenStart)} if it joins the two tokens around it into
+   * one run: not empty, at most {@value #MAX_GAP} characters, all of them {@link #JOINERS}; else 0.
+   */
+  private int joiningGap(int gapStart, int tokenStart) {
+    int length = tokenStart - gapStart;
+    if (length == 0 || length > MAX_GAP || gapStart < text.start()) {
+      return 0;
+    }
+    for (int i = gapStart; i < tokenStart; i++) {
+      if (JOINERS.indexOf(text.charAt(i)) < 0) {
+        return 0;
+      }
+    }
+    return length;
   }
 
   /** CR, LF, NEL, and the line and paragraph separators: Unicode's sentence rules break after each. */

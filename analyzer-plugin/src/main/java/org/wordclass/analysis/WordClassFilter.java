@@ -19,6 +19,7 @@ import org.apache.lucene.util.BytesRefBuilder;
 import org.wordclass.decoding.CandidateSource;
 import org.wordclass.decoding.Decoder;
 import org.wordclass.decoding.Lattice;
+import org.wordclass.decoding.RunPositions;
 import org.wordclass.model.HmmModel;
 import org.wordclass.model.TagSet;
 import org.wordclass.model.Spelling;
@@ -61,6 +62,12 @@ import org.wordclass.model.WordShape;
  * token, exactly as if a sentence ended there. Tags near such a cut can differ from those of an
  * uncut decoding, since each side loses the context of the other.
  *
+ * <p>Where the tokenizer marks runs of tokens written together ({@link WrittenTogetherAttribute},
+ * set by {@link SentenceStandardTokenizer}: the pieces of a URL, an e-mail address, a path or a
+ * date), each run is decoded as one word, observed as its text as written (tokens and gaps), and
+ * all its tokens get that word's class, confidence and explanation. A run cut by the window
+ * starts afresh after the cut. Chains without the attribute decode token by token.
+ *
  * <h2>Where it belongs in a chain</h2>
  *
  * Right after the tokenizer, before lowercasing, stemming and stop words: capital letters and
@@ -88,6 +95,8 @@ public final class WordClassFilter extends TokenFilter {
   private final PositionIncrementAttribute posIncAtt = addAttribute(PositionIncrementAttribute.class);
   private final SentenceAttribute sentenceAtt = addAttribute(SentenceAttribute.class);
   private final WordClassAttribute classAtt = addAttribute(WordClassAttribute.class);
+  /** Null unless the tokenizer marks runs of tokens written together, so that other chains decode as before. */
+  private final WrittenTogetherAttribute runAtt;
   private final KeywordAttribute keywordAtt;
   private final PayloadAttribute payloadAtt;
   /** Null unless explanations are asked for, so that indexing pays one branch per token for them. */
@@ -100,12 +109,16 @@ public final class WordClassFilter extends TokenFilter {
   private final String modelName;
   private final Decoder decoder;
   private final Lattice lattice;
+  private final RunPositions positions;
   private final BytesRef[] payloads;
   private final BytesRefBuilder payload = new BytesRefBuilder();
 
   /** Copies of buffered tokens; while {@link #carried}, {@code slots[windowSize]} holds the next window's first. */
   private AttributeSource[] slots = new AttributeSource[0];
   private CharTermAttribute[] slotTerms = new CharTermAttribute[0];
+  /** Per slot its run mark and position increment, when {@link #runAtt} is there. */
+  private WrittenTogetherAttribute[] slotRuns = new WrittenTogetherAttribute[0];
+  private PositionIncrementAttribute[] slotPosIncs = new PositionIncrementAttribute[0];
   /**
    * This stream's attribute implementations and, per slot, their clones in the same order, so
    * that saving and restoring a token copies impl to impl directly; {@link
@@ -143,6 +156,8 @@ public final class WordClassFilter extends TokenFilter {
     this.modelName = options.model().name();
     this.decoder = new Decoder(options.model(), options.order());
     this.lattice = decoder.lattice();
+    this.positions = new RunPositions(lattice);
+    this.runAtt = hasAttribute(WrittenTogetherAttribute.class) ? getAttribute(WrittenTogetherAttribute.class) : null;
     this.payloads = options.payload().encodeAll(tags, options.weights());
     this.payloadAtt = options.payload() == PayloadEncoding.NONE ? null : addAttribute(PayloadAttribute.class);
     this.keywordAtt = options.qualifiedTerms() ? addAttribute(KeywordAttribute.class) : null;
@@ -203,15 +218,31 @@ public final class WordClassFilter extends TokenFilter {
   }
 
   private void decode(int size) {
-    lattice.clear();
+    positions.clear();
     for (int i = 0; i < size; i++) {
-      lattice.add(slotTerms[i].buffer(), 0, slotTerms[i].length());
+      CharTermAttribute term = slotTerms[i];
+      if (runAtt != null && continuesRun(i)) {
+        WrittenTogetherAttribute run = slotRuns[i];
+        positions.add(term.buffer(), 0, term.length(), run.gapBuffer(), 0, run.gapLength());
+      } else {
+        positions.add(term.buffer(), 0, term.length());
+      }
     }
-    best = Decoder.ensureCapacity(best, size);
+    positions.finish();
+    best = Decoder.ensureCapacity(best, lattice.size());
     decoder.viterbi(best);
     if (posteriors) {
       decoder.forwardBackward();
     }
+  }
+
+  /**
+   * Whether buffered token {@code i} continues the run of the token before it: marked so, and
+   * right after it (a filter upstream that removed a token in between, such as a stop filter,
+   * leaves a position gap, and the two were not written together).
+   */
+  private boolean continuesRun(int i) {
+    return slotRuns[i].continuesRun() && slotPosIncs[i].getPositionIncrement() == 1;
   }
 
   /** Restores buffered token {@code i} and sets its class. */
@@ -220,9 +251,10 @@ public final class WordClassFilter extends TokenFilter {
     for (int a = 0; a < saved.length; a++) {
       saved[a].copyTo(liveImpls[a]);
     }
-    int tag = lattice.candidateTag(i, best[i]);
+    int p = positions.positionOf(i);
+    int tag = lattice.candidateTag(p, best[p]);
     String name = tags.name(tag);
-    double confidence = options.confidence() ? decoder.tagPosterior(i, best[i]) : Double.NaN;
+    double confidence = options.confidence() ? decoder.tagPosterior(p, best[p]) : Double.NaN;
     typeAtt.setType(name);
     classAtt.setWordClass(name, tag, confidence);
     classAtt.setModelName(modelName);
@@ -232,23 +264,28 @@ public final class WordClassFilter extends TokenFilter {
       payloadAtt.setPayload(payload.get());
     }
     if (explanationAtt != null) {
-      explain(i);
+      explain(p);
     }
   }
 
-  /** Fills the explanation of token {@code i}, whose term is restored in {@link #termAtt}. */
-  private void explain(int i) {
-    CandidateSource source = lattice.source(i);
-    char[] term = termAtt.buffer();
-    int length = termAtt.length();
+  /**
+   * Fills the explanation from lattice position {@code p}: of the token on its own, whose term is
+   * restored in {@link #termAtt}, or of the run it belongs to.
+   */
+  private void explain(int p) {
+    CandidateSource source = lattice.source(p);
+    boolean run = positions.isRun(p);
+    char[] text = run ? positions.text() : termAtt.buffer();
+    int start = run ? positions.runStart(p) : 0;
+    int end = run ? positions.runEnd(p) : termAtt.length();
     if (source == CandidateSource.UNKNOWN) {
-      int ending = lattice.matchedEndingLength(i);
-      explanationAtt.setSource(source, null, new String(term, length - ending, ending), WordShape.classify(term, 0, length));
+      int ending = lattice.matchedEndingLength(p);
+      explanationAtt.setSource(source, null, new String(text, end - ending, ending), WordShape.classify(text, start, end - start));
     } else {
-      String lookedUpAs = source == CandidateSource.LOWERCASED_FIRST_WORD ? Spelling.lowerCase(new String(term, 0, length)) : null;
+      String lookedUpAs = source == CandidateSource.LOWERCASED_FIRST_WORD ? Spelling.lowerCase(new String(text, start, end - start)) : null;
       explanationAtt.setSource(source, lookedUpAs, null, null);
     }
-    decoder.tagPosteriors(i, explanationAtt.classProbabilities(tags.size()));
+    decoder.tagPosteriors(p, explanationAtt.classProbabilities(tags.size()));
   }
 
   /** Restores token {@code i} again (downstream filters may have changed it) as its qualified twin. */
@@ -266,11 +303,15 @@ public final class WordClassFilter extends TokenFilter {
       int grown = Math.min(Math.max(i + 1, slots.length * 2), options.maxWindow());
       slots = Arrays.copyOf(slots, grown);
       slotTerms = Arrays.copyOf(slotTerms, grown);
+      slotRuns = Arrays.copyOf(slotRuns, grown);
+      slotPosIncs = Arrays.copyOf(slotPosIncs, grown);
       slotImpls = Arrays.copyOf(slotImpls, grown);
     }
     if (slots[i] == null) {
       slots[i] = cloneAttributes();
       slotTerms[i] = slots[i].getAttribute(CharTermAttribute.class);
+      slotRuns[i] = runAtt == null ? null : slots[i].getAttribute(WrittenTogetherAttribute.class);
+      slotPosIncs[i] = runAtt == null ? null : slots[i].getAttribute(PositionIncrementAttribute.class);
       slotImpls[i] = impls(slots[i]);
     }
     AttributeImpl[] saved = slotImpls[i];
@@ -309,6 +350,12 @@ public final class WordClassFilter extends TokenFilter {
     CharTermAttribute term = slotTerms[a];
     slotTerms[a] = slotTerms[b];
     slotTerms[b] = term;
+    WrittenTogetherAttribute run = slotRuns[a];
+    slotRuns[a] = slotRuns[b];
+    slotRuns[b] = run;
+    PositionIncrementAttribute posInc = slotPosIncs[a];
+    slotPosIncs[a] = slotPosIncs[b];
+    slotPosIncs[b] = posInc;
     AttributeImpl[] impls = slotImpls[a];
     slotImpls[a] = slotImpls[b];
     slotImpls[b] = impls;
@@ -324,7 +371,7 @@ public final class WordClassFilter extends TokenFilter {
     exhausted = false;
     qualifiedPending = false;
     poolChecked = false;
-    lattice.clear();
+    positions.clear();
   }
 
   /** Pooled slots are clones of this stream's attributes; a consumer may have added some since. */
@@ -336,6 +383,8 @@ public final class WordClassFilter extends TokenFilter {
     if (count != implCount) {
       Arrays.fill(slots, null);
       Arrays.fill(slotTerms, null);
+      Arrays.fill(slotRuns, null);
+      Arrays.fill(slotPosIncs, null);
       Arrays.fill(slotImpls, null);
       implCount = count;
       AttributeImpl[] kept = new AttributeImpl[count];

@@ -15,6 +15,7 @@ public final class Tagger {
   public record Tagging(int[] tags, double[] confidences, boolean[] known) {}
 
   private final Decoder decoder;
+  private final RunPositions positions;
   private int[] best = new int[64];
 
   public Tagger(HmmModel model) {
@@ -23,6 +24,7 @@ public final class Tagger {
 
   public Tagger(Decoder decoder) {
     this.decoder = decoder;
+    this.positions = new RunPositions(decoder.lattice());
   }
 
   public Decoder decoder() {
@@ -31,24 +33,46 @@ public final class Tagger {
 
   /** Tags {@code tokens}; computes confidences only when asked, since they cost time. */
   public Tagging tag(List<String> tokens, boolean withConfidence) {
-    Lattice lattice = decoder.lattice();
-    lattice.clear();
-    for (String token : tokens) {
-      lattice.add(token);
+    return tag(tokens, null, withConfidence);
+  }
+
+  /**
+   * Tags {@code tokens}, each run of tokens written together as one word ({@link RunPositions}):
+   * {@code gaps}, if not null, holds per token the characters between it and the previous token
+   * when the two are written together, else null or empty. The result has one entry per token,
+   * those of a run all the same.
+   */
+  public Tagging tag(List<String> tokens, List<String> gaps, boolean withConfidence) {
+    positions.clear();
+    for (int t = 0; t < tokens.size(); t++) {
+      char[] token = tokens.get(t).toCharArray();
+      String gap = gaps == null ? null : gaps.get(t);
+      if (gap == null || gap.isEmpty()) {
+        positions.add(token, 0, token.length);
+      } else {
+        positions.add(token, 0, token.length, gap.toCharArray(), 0, gap.length());
+      }
     }
+    positions.finish();
+    Lattice lattice = decoder.lattice();
     int n = lattice.size();
     best = Decoder.ensureCapacity(best, n);
     decoder.viterbi(best);
-    double[] confidences = new double[n];
-    boolean[] known = new boolean[n];
     if (withConfidence && n > 0) {
       decoder.forwardBackward();
     }
-    for (int i = 0; i < n; i++) {
-      confidences[i] = withConfidence ? decoder.tagPosterior(i, best[i]) : Double.NaN;
-      known[i] = lattice.isKnown(i);
+    int[] tags = decoder.tagsOf(best);
+    int count = positions.tokens();
+    int[] tokenTags = new int[count];
+    double[] confidences = new double[count];
+    boolean[] known = new boolean[count];
+    for (int t = 0; t < count; t++) {
+      int i = positions.positionOf(t);
+      tokenTags[t] = tags[i];
+      confidences[t] = withConfidence ? decoder.tagPosterior(i, best[i]) : Double.NaN;
+      known[t] = lattice.isKnown(i);
     }
-    return new Tagging(decoder.tagsOf(best), confidences, known);
+    return new Tagging(tokenTags, confidences, known);
   }
 
   /** Tag names of {@code tokens}. */

@@ -149,6 +149,83 @@ public class TestSentenceStandardTokenizer extends BaseTokenStreamTestCase {
     assertEquals("", sentences(" . ! "));
   }
 
+  /** Each token with its gap before it when it continues a run: {@code [gap]token}. */
+  private static String runs(String text) throws IOException {
+    StringBuilder out = new StringBuilder();
+    try (Analyzer a = sentenceChain(); TokenStream ts = a.tokenStream("f", text)) {
+      CharTermAttribute term = ts.addAttribute(CharTermAttribute.class);
+      WrittenTogetherAttribute run = ts.addAttribute(WrittenTogetherAttribute.class);
+      ts.reset();
+      while (ts.incrementToken()) {
+        out.append(out.length() == 0 ? "" : " ");
+        if (run.continuesRun()) {
+          out.append('[').append(run.gapBuffer(), 0, run.gapLength()).append(']');
+        }
+        out.append(term);
+      }
+      ts.end();
+    }
+    return out.toString();
+  }
+
+  public void testRunsOfTokensWrittenTogether() throws IOException {
+    // invented text in the shapes EWT dev has (a path ending in a date, an e-mail address, b/c, a
+    // date with slashes, a query string); the tokens are the standard tokenizer's (tested above)
+    assertEquals("see www.ferry.example [//]timetable [/]2005.09 today",
+        runs("see www.ferry.example//timetable/2005.09 today"));
+    assertEquals("mail crew42 [@]ferry.example b [/]c 08 [/]16 [/]2000 or ferry.example [/]search q [=]rye [&]n [=]2",
+        runs("mail crew42@ferry.example b/c 08/16/2000 or ferry.example/search?q=rye&n=2"));
+    // the JDK's sentence rules end a sentence at that question mark, and a run never crosses one
+    assertEquals("search/0 q/1", sentences("search?q"));
+    // whitespace, characters outside the joining set (the hyphen, the colon, the full stop
+    // between two tokens: chosen on EWT dev), a sentence boundary end a run
+    assertEquals("ferry example b c one two long term at 10 30 2005 x",
+        runs("ferry / example b, c one\n/two long-term at 10:30 2005./x"));
+    // a run may not start a field; a gap longer than MAX_GAP is punctuation of its own
+    assertEquals("ferry ferry", runs("//ferry" + "/".repeat(SentenceStandardTokenizer.MAX_GAP + 1) + "ferry"));
+  }
+
+  public void testRunGapsMatchTheTextOnRandomText() throws IOException {
+    // the gap of every token is the text between it and the token before, when that text is
+    // made of joining characters only; checked against the offsets (no char filter here)
+    try (Analyzer a = sentenceChain()) {
+      for (int i = 0; i < 1000; i++) {
+        String text = randomTextWithJoiners();
+        try (TokenStream ts = a.tokenStream("f", text)) {
+          OffsetAttribute offset = ts.addAttribute(OffsetAttribute.class);
+          SentenceAttribute sentence = ts.addAttribute(SentenceAttribute.class);
+          WrittenTogetherAttribute run = ts.addAttribute(WrittenTogetherAttribute.class);
+          ts.reset();
+          int previousEnd = -1;
+          int previousSentence = 0;
+          while (ts.incrementToken()) {
+            String between = previousEnd < 0 ? "" : text.substring(previousEnd, offset.startOffset());
+            boolean joins = !between.isEmpty() && between.length() <= SentenceStandardTokenizer.MAX_GAP
+                && between.chars().allMatch(c -> SentenceStandardTokenizer.JOINERS.indexOf(c) >= 0)
+                && sentence.getSentenceIndex() == previousSentence;
+            assertEquals(text, joins ? between : "", new String(run.gapBuffer(), 0, run.gapLength()));
+            previousEnd = offset.endOffset();
+            previousSentence = sentence.getSentenceIndex();
+          }
+          ts.end();
+        }
+      }
+    }
+  }
+
+  private static String randomTextWithJoiners() {
+    StringBuilder text = new StringBuilder();
+    String pieces = SentenceStandardTokenizer.JOINERS + " .,-!\n";
+    while (text.length() < 200) {
+      text.append(random().nextBoolean() ? TestUtil.randomSimpleString(random(), 1, 8) : TestUtil.randomRealisticUnicodeString(random(), 1, 6));
+      int gap = random().nextInt(4);
+      for (int k = 0; k < gap; k++) {
+        text.append(pieces.charAt(random().nextInt(pieces.length())));
+      }
+    }
+    return text.toString();
+  }
+
   public void testSentenceBoundaryAfterLongGap() throws IOException {
     String gap = " " + "-".repeat(3 * SentenceStandardTokenizer.KEPT_TEXT) + ". ";
     assertEquals("one/0 Two/1", sentences("one" + gap + "Two"));

@@ -90,7 +90,7 @@ final class CrossValidateCommand extends BaseCommand {
   private FoldResult runFold(int fold, Corpus input, TrainingOptions options, Progress progress) {
     TagCounts counts = TagCounts.forOptions(options);
     long[] seen = new long[1];
-    progress.read(input, analysis.feeding(inFold(fold, false, s -> counts.add(s.words(), s.tags()), seen)));
+    progress.read(input, analysis.feeding(inFold(fold, false, counts::add, seen)));
     analysis.finish();
     if (seen[0] < folds) {
       throw new ParameterException(spec.commandLine(),

@@ -59,7 +59,8 @@ final class TrainCommand extends BaseCommand {
     Progress progress = Progress.start("train", input, 1, err());
     TagCounts counts = TagCounts.forOptions(options);
     try {
-      Consumer<Sentence> learn = s -> counts.add(s.words(), s.tags());
+      // a run of tokens written together is one observation, as the filter decodes it
+      Consumer<Sentence> learn = counts::add;
       Consumer<Sentence> throughChain = analysis.feeding(learn);
       progress.read(input, withTreebankTokens && analysis.enabled ? throughChain.andThen(learn) : throughChain);
       analysis.finish();

@@ -12,8 +12,10 @@ import org.apache.lucene.analysis.Analyzer;
 import org.apache.lucene.analysis.TokenStream;
 import org.apache.lucene.analysis.tokenattributes.CharTermAttribute;
 import org.apache.lucene.analysis.tokenattributes.OffsetAttribute;
+import org.apache.lucene.analysis.tokenattributes.PositionIncrementAttribute;
 import org.apache.lucene.analysis.tokenattributes.SentenceAttribute;
 import org.wordclass.analysis.WordClassOptions;
+import org.wordclass.analysis.WrittenTogetherAttribute;
 
 /**
  * Runs raw text (a sentence, or a whole document as one field value) through a Lucene analysis
@@ -37,6 +39,9 @@ import org.wordclass.analysis.WordClassOptions;
  *       left out, counted.
  * </ul>
  *
+ * Tokens that continue a run written together ({@link WrittenTogetherAttribute}) carry their gap
+ * in {@link Sentence#gaps}, so that training can learn each run as one observation ({@link
+ * Sentence#runsJoined}) and evaluation decode it as the filter does while scoring every token.
  * Gold words that no token covers (punctuation a tokenizer drops) are counted too. A sentence
  * without raw text, or whose text does not match its forms, is an error naming file and line,
  * or is skipped and counted when skipping is allowed.
@@ -100,6 +105,9 @@ public final class AnalyzerAlignment {
       CharTermAttribute term = stream.addAttribute(CharTermAttribute.class);
       OffsetAttribute offset = stream.addAttribute(OffsetAttribute.class);
       SentenceAttribute sentenceAtt = stream.addAttribute(SentenceAttribute.class);
+      PositionIncrementAttribute posInc = stream.addAttribute(PositionIncrementAttribute.class);
+      WrittenTogetherAttribute runAtt = stream.hasAttribute(WrittenTogetherAttribute.class)
+          ? stream.getAttribute(WrittenTogetherAttribute.class) : null;
       stream.reset();
       Piece piece = new Piece();
       int pieceSentence = 0;
@@ -134,7 +142,9 @@ public final class AnalyzerAlignment {
           tokensTaggedByALaterWord++;
         }
         if (c != Case.NO_WORD) {
-          piece.add(term.toString(), first, c == Case.SEVERAL_WORDS && host >= 0 ? host : first, start, end, field);
+          // as the filter has it: a token removed in between ends the run
+          String gap = runAtt != null && runAtt.continuesRun() && posInc.getPositionIncrement() == 1 ? new String(runAtt.gapBuffer(), 0, runAtt.gapLength()) : null;
+          piece.add(term.toString(), gap, first, c == Case.SEVERAL_WORDS && host >= 0 ? host : first, start, end, field);
         }
       }
       stream.end();
@@ -256,12 +266,18 @@ public final class AnalyzerAlignment {
   private static final class Piece {
     final List<String> tokens = new ArrayList<>();
     final List<String> tags = new ArrayList<>();
+    final List<String> gaps = new ArrayList<>();
+    boolean hasRun;
     int emitted;
     int firstWord = -1;
     int start = -1;
     int end;
 
-    void add(String token, int word, int taggedBy, int tokenStart, int tokenEnd, FieldValue field) {
+    void add(String token, String gap, int word, int taggedBy, int tokenStart, int tokenEnd, FieldValue field) {
+      // a run cut by the window starts afresh, as in the filter
+      String kept = tokens.isEmpty() ? null : gap;
+      gaps.add(kept);
+      hasRun |= kept != null;
       tokens.add(token);
       tags.add(field.tags.get(taggedBy));
       if (firstWord < 0) {
@@ -280,7 +296,7 @@ public final class AnalyzerAlignment {
       Sentence origin = field.origin.get(firstWord);
       String text = field.text.substring(Math.min(start, end), end);
       out.add(new Sentence(List.copyOf(tokens), List.copyOf(tags), text, spaces, origin.file(), origin.line(), List.of(),
-          out.isEmpty()));
+          out.isEmpty(), hasRun ? gaps.toArray(String[]::new) : null));
     }
   }
 

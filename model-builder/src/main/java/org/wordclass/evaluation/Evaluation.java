@@ -56,10 +56,13 @@ public final class Evaluation {
     return index;
   }
 
-  /** Tags {@code sentence} with the model and counts the result against its gold tags. */
+  /**
+   * Tags {@code sentence} with the model (a run of tokens written together as one word, see {@link
+   * Sentence#gaps}) and counts the result against its gold tags, token by token.
+   */
   public void add(Sentence sentence) {
     long start = System.nanoTime();
-    Tagger.Tagging tagging = tagger.tag(sentence.words(), false);
+    Tagger.Tagging tagging = tagger.tag(sentence.words(), sentence.gapList(), false);
     nanos += System.nanoTime() - start;
     candidates += tagger.decoder().lattice().totalCandidates();
     add(sentence.tags(), tagging.tags(), tagging.known());

@@ -4,6 +4,7 @@ import java.util.ArrayList;
 import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
+import org.wordclass.corpus.Sentence;
 import org.wordclass.model.Spelling;
 
 /**
@@ -53,6 +54,15 @@ public final class TagCounts {
   /** Counts for training with {@code options}: they keep the sentences if latent sub-states need them. */
   public static TagCounts forOptions(TrainingOptions options) {
     return new TagCounts(options.latentRounds() > 0);
+  }
+
+  /**
+   * Counts {@code sentence} as the decoder sees it: each run of tokens written together (an
+   * analysis chain's pieces of a URL or an address, {@link Sentence#gaps}) one word with its tag.
+   */
+  public void add(Sentence sentence) {
+    Sentence units = sentence.runsJoined();
+    add(units.words(), units.tags());
   }
 
   /** Counts one tagged sentence; empty sentences are ignored. */

@@ -77,6 +77,24 @@ class AnalyzerAlignmentTest {
   }
 
   @Test
+  void runWrittenTogetherIsOneObservationForTrainingAndEveryTokenIsScored() {
+    // invented; EWT has an e-mail address as one word (PROPN) and "b/c" as one word (SCONJ)
+    Sentence s = sentence("Mail orders@rye.example b/c we bake",
+        new String[] {"Mail", "orders@rye.example", "b/c", "we", "bake"},
+        new String[] {"VERB", "PROPN", "SCONJ", "PRON", "VERB"}, List.of());
+    try (Analyzer analyzer = AnalysisChain.DEFAULT.build()) {
+      AnalyzerAlignment alignment = new AnalyzerAlignment(analyzer, false);
+      Sentence aligned = one(alignment, s);
+      assertEquals(List.of("Mail", "orders", "rye.example", "b", "c", "we", "bake"), aligned.words());
+      assertEquals(Arrays.asList(null, null, "@", null, "/", null, null), aligned.gapList());
+      assertEquals(List.of("VERB", "PROPN", "PROPN", "SCONJ", "SCONJ", "PRON", "VERB"), aligned.tags());
+      Sentence units = aligned.runsJoined();
+      assertEquals(List.of("Mail", "orders@rye.example", "b/c", "we", "bake"), units.words());
+      assertEquals(List.of("VERB", "PROPN", "SCONJ", "PRON", "VERB"), units.tags());
+    }
+  }
+
+  @Test
   void missingTextIsRefusedWithFileAndLineOrSkippedAndCounted() {
     Sentence noText = sentence(null, new String[] {"Rye"}, new String[] {"NOUN"}, List.of());
     try (Analyzer analyzer = AnalysisChain.DEFAULT.build()) {
