@@ -55,13 +55,13 @@ public final class ChainLossTables {
       List<Sentence> wordIndex = alignment.align(List.of(withWordIndices(sentence)));
       for (int p = 0; p < gold.size(); p++) {
         Sentence piece = gold.get(p);
-        String[] predicted = tagger.tagNames(piece.words());
+        int[] predicted = tagger.tag(piece.words(), piece.gapList(), false).tags();
         for (int i = 0; i < piece.size(); i++) {
           String form = sentence.words().get(Integer.parseInt(wordIndex.get(p).tags().get(i)));
           String token = piece.words().get(i);
           int c = token.equals(form) ? 0 : form.contains(token) ? 1 : 2;
           tokens[c]++;
-          right[c] += predicted[i].equals(piece.tags().get(i)) ? 1 : 0;
+          right[c] += model.tags().name(predicted[i]).equals(piece.tags().get(i)) ? 1 : 0;
           if (c == 0 && fromTreebankTokens.get(p).tags().get(i).equals(piece.tags().get(i))) {
             rightFromTreebankTokens++;
           }
@@ -77,7 +77,7 @@ public final class ChainLossTables {
 
   private static Sentence withTags(Sentence s, List<String> tags) {
     return new Sentence(s.words(), tags, s.text(), s.spaceAfter(), s.file(), s.line(), s.multiwordTokens(),
-        s.startsDocument());
+        s.startsDocument(), null);
   }
 
   /** The sentence with each word's index in place of its tag, so that aligned tokens say which word gave their tag. */
