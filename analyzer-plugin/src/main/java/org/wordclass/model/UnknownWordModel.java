@@ -18,6 +18,9 @@ import org.apache.lucene.store.DataOutput;
  *       {@code P(t|l_{n-i+1..n}) = (P^(t|l_{n-i+1..n}) + θ P(t|l_{n-i+2..n})) / (1 + θ)};
  *   <li>each spelling shape (see {@link WordShape}) keeps its own counts, abstracted in turn to
  *       the distribution over all rare words;
+ *   <li>endings are counted and looked up in the model's {@link EndingAlphabet}: as written, or
+ *       with the letters a language's suffixes alternate folded into one (Turkish vowel harmony),
+ *       one table step per character;
  *   <li>where the model has them, two further cues multiply that distribution: what the word's
  *       lower-case form mostly is, for a word written with a capital ({@link LowerCaseFormCue}),
  *       and the tags of rare words with the same first letters, {@code P(t | beginning) / P(t)}
