@@ -40,6 +40,28 @@ public enum EndingAlphabet {
         default -> c;
       };
     }
+  },
+
+  /**
+   * Finnish vowel harmony: a suffix takes the back vowels {@code a}, {@code o}, {@code u} after a
+   * word with back vowels and the front {@code ä}, {@code ö}, {@code y} otherwise ({@code
+   * -ssa/-ssä}, {@code -lla/-llä}, {@code -ko/-kö}; {@code e} and {@code i} are neutral; a fact of
+   * Finnish grammar). Folded: {@code ä} to {@code a}, {@code ö} to {@code o}, {@code y} to
+   * {@code u}, the capitals likewise.
+   */
+  FINNISH_VOWEL_HARMONY {
+    @Override
+    public char fold(char c) {
+      return switch (c) {
+        case 'ä' -> 'a';
+        case 'ö' -> 'o';
+        case 'y' -> 'u';
+        case 'Ä' -> 'A';
+        case 'Ö' -> 'O';
+        case 'Y' -> 'U';
+        default -> c;
+      };
+    }
   };
 
   /** The char that stands for {@code c} in endings. */
@@ -54,7 +76,7 @@ public enum EndingAlphabet {
     return new String(out);
   }
 
-  /** The name {@code train --ending-alphabet} takes: {@code as-written}, {@code turkish-vowel-harmony}. */
+  /** The name {@code train --ending-alphabet} takes: {@code as-written}, {@code turkish-vowel-harmony}, ... */
   public String optionName() {
     return name().toLowerCase(java.util.Locale.ROOT).replace('_', '-');
   }

@@ -7,10 +7,10 @@ import java.util.List;
 import org.junit.jupiter.api.Test;
 
 /**
- * The Turkish alphabet folds the variants of one suffix that vowel harmony makes into one
- * spelling, and nothing else. The suffixes are those of Turkish grammar (common practice): the
- * locative -da/-de, the plural -lar/-ler, the genitive -ın/-in/-un/-ün; the words are invented
- * or everyday ones (from memory).
+ * The Turkish and Finnish alphabets fold the variants of one suffix that vowel harmony makes
+ * into one spelling, and nothing else. The suffixes are those of each language's grammar (common
+ * practice): Turkish locative -da/-de, plural -lar/-ler, genitive -ın/-in/-un/-ün; the words are
+ * invented or everyday ones (from memory).
  */
 class EndingAlphabetTest {
   private static final EndingAlphabet TR = EndingAlphabet.TURKISH_VOWEL_HARMONY;
@@ -36,6 +36,20 @@ class EndingAlphabetTest {
     assertEquals("kapı", TR.fold("kapı"));
   }
 
+  /** Finnish: the inessive -ssa/-ssä, the adessive -lla/-llä, the question particle -ko/-kö (common practice). */
+  @Test
+  void finnishVariantsShareTheirFoldedEnding() {
+    EndingAlphabet fi = EndingAlphabet.FINNISH_VOWEL_HARMONY;
+    assertEquals(ending(fi.fold("talossa"), 3), ending(fi.fold("kylässä"), 3));
+    assertEquals(ending(fi.fold("autolla"), 3), ending(fi.fold("pöydällä"), 3));
+    assertEquals(ending(fi.fold("onko"), 2), ending(fi.fold("näkö"), 2));
+    assertEquals("kuluu", fi.fold("kylyy"));
+    // e and i are neutral in Finnish and stay
+    assertEquals("talossa", fi.fold("talossa"));
+    assertEquals("kivellä".length(), fi.fold("kivellä").length());
+    assertEquals("kivella", fi.fold("kivellä"));
+  }
+
   @Test
   void asWrittenChangesNothing() {
     for (String w : List.of("evlerde", "İstanbul'un", "Straße", "ÉTÉ")) {
@@ -47,6 +61,7 @@ class EndingAlphabetTest {
   void optionNamesAreThoseOfTrain() {
     assertEquals("as-written", EndingAlphabet.AS_WRITTEN.optionName());
     assertEquals("turkish-vowel-harmony", TR.optionName());
+    assertEquals("finnish-vowel-harmony", EndingAlphabet.FINNISH_VOWEL_HARMONY.optionName());
   }
 
   private static String ending(String word, int length) {

@@ -109,10 +109,11 @@ final class TrainingOptionsMixin {
           + "Default: ${DEFAULT-VALUE}.")
   double minTagShare;
 
-  @Option(names = "--ending-alphabet", paramLabel = "as-written|turkish-vowel-harmony",
+  @Option(names = "--ending-alphabet", paramLabel = "as-written|turkish-vowel-harmony|finnish-vowel-harmony",
       description = "How the unknown-word model spells the endings it counts: as written, or with the vowels "
-          + "Turkish suffixes alternate by vowel harmony folded together (e with a; i, u, ü with ı; ö with o), "
-          + "so that -da and -de, -ın, -in, -un and -ün share their counts. Default: ${DEFAULT-VALUE}.")
+          + "a language's suffixes alternate by vowel harmony folded together, so that the variants of one "
+          + "suffix share their counts: Turkish e with a; i, u, ü with ı; ö with o (-da and -de, -ın, -in, "
+          + "-un and -ün); Finnish ä with a, ö with o, y with u (-ssa and -ssä). Default: ${DEFAULT-VALUE}.")
   String endingAlphabet;
 
   /** The options given; a value the estimator refuses is reported as a usage error. */
@@ -140,7 +141,8 @@ final class TrainingOptionsMixin {
       }
     }
     throw new ParameterException(mixee.commandLine(),
-        "Invalid value for --ending-alphabet: '" + value + "' is not one of as-written, turkish-vowel-harmony");
+        "Invalid value for --ending-alphabet: '" + value + "' is not one of " + java.util.Arrays.stream(
+            EndingAlphabet.values()).map(EndingAlphabet::optionName).collect(java.util.stream.Collectors.joining(", ")));
   }
 
   /** Reads a prior's name as {@link TrainingOptions#describe()} writes it. */

@@ -48,7 +48,7 @@ import org.wordclass.model.EndingAlphabet;
  *     candidates. With n occurrences a pair seen once goes only where n exceeds 1 / share, so
  *     rare words are never touched. 0 keeps every pair
  * @param endingAlphabet how the unknown-word model spells the endings it counts and looks up: as
- *     written, or with the vowels of Turkish vowel harmony folded ({@link EndingAlphabet})
+ *     written, or with the vowels of a language's vowel harmony folded ({@link EndingAlphabet})
  */
 public record TrainingOptions(
     int order,
