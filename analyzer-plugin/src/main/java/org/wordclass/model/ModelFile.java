@@ -59,7 +59,13 @@ public final class ModelFile {
    * known only from mid-sentence are looked up in lower case as well.
    */
   public static final int VERSION_FIRST_WORD_BITS = 3;
-  public static final int VERSION_CURRENT = VERSION_FIRST_WORD_BITS;
+  /**
+   * Version 4 ends the unknown-word model with a byte naming its {@link EndingAlphabet}. A model
+   * whose endings are as written is still written as version 3 (the oldest version that holds
+   * it), so that it keeps its bytes and older readers.
+   */
+  public static final int VERSION_ENDING_ALPHABET = 4;
+  public static final int VERSION_CURRENT = VERSION_ENDING_ALPHABET;
 
   /** Largest model file this reader accepts, a guard against reading a wrong file whole. */
   public static final long MAX_FILE_BYTES = 1L << 30;
@@ -78,9 +84,13 @@ public final class ModelFile {
     });
   }
 
-  /** Writes {@code model} to {@code out}, header to footer. */
+  /**
+   * Writes {@code model} to {@code out}, header to footer, in the oldest format version that
+   * holds it ({@link #VERSION_ENDING_ALPHABET} only for folded endings).
+   */
   public static void write(HmmModel model, IndexOutput out) throws IOException {
-    CodecUtil.writeHeader(out, CODEC, VERSION_CURRENT);
+    int version = model.unknownWords().formatVersion();
+    CodecUtil.writeHeader(out, CODEC, version);
     model.writeProvenanceTo(out);
     out.writeByte((byte) model.order());
     model.tags().writeTo(out);
@@ -88,7 +98,7 @@ public final class ModelFile {
     model.cues().writeTo(out);
     model.transitions().writeTo(out);
     model.lexicon().writeTo(out);
-    model.unknownWords().writeTo(out);
+    model.unknownWords().writeTo(out, version);
     CodecUtil.writeFooter(out);
   }
 

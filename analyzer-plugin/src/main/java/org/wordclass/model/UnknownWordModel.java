@@ -18,6 +18,9 @@ import org.apache.lucene.store.DataOutput;
  *       {@code P(t|l_{n-i+1..n}) = (P^(t|l_{n-i+1..n}) + θ P(t|l_{n-i+2..n})) / (1 + θ)};
  *   <li>each spelling shape (see {@link WordShape}) keeps its own counts, abstracted in turn to
  *       the distribution over all rare words;
+ *   <li>endings are counted and looked up in the model's {@link EndingAlphabet}: as written, or
+ *       with the letters a language's suffixes alternate folded into one (Turkish vowel harmony),
+ *       one table step per character;
  *   <li>where the model has them, two further cues multiply that distribution: what the word's
  *       lower-case form mostly is, for a word written with a capital ({@link LowerCaseFormCue}),
  *       and the tags of rare words with the same first letters, {@code P(t | beginning) / P(t)}
@@ -53,6 +56,8 @@ public final class UnknownWordModel {
   private final AffixTrie[] beginningTries;
   private final int[][] openOfBeginningCount;
   private final AffixTrie[] endingTries;
+  /** How endings are spelled in {@link #endingTries}: each char of a word is folded by it before a trie step. */
+  private final EndingAlphabet endingAlphabet;
   /**
    * Per trie, per count entry: the index of its tag among the open tags, or -1 for a closed
    * tag. Found once here rather than by a binary search for every count of every ending that
@@ -69,7 +74,7 @@ public final class UnknownWordModel {
   private UnknownWordModel(Builder b) {
     this(b.theta, b.maxEndingLength, b.openTags, b.logPrior, b.logPriorCapitalised == null ? b.logPrior
         : b.logPriorCapitalised, b.baseDistribution, b.trieOfShape, b.endingTries, b.lowerCaseForms,
-        b.maxBeginningLength, b.beginningTries);
+        b.maxBeginningLength, b.beginningTries, b.endingAlphabet);
   }
 
   private UnknownWordModel(
@@ -83,7 +88,11 @@ public final class UnknownWordModel {
       AffixTrie[] endingTries,
       LowerCaseFormCue lowerCaseForms,
       int maxBeginningLength,
-      AffixTrie[] beginningTries) {
+      AffixTrie[] beginningTries,
+      EndingAlphabet endingAlphabet) {
+    if (endingAlphabet == null) {
+      throw new IllegalArgumentException("an unknown-word model needs an ending alphabet");
+    }
     if (openTags == null || logPrior == null || baseDistribution == null || trieOfShape == null || endingTries == null) {
       throw new IllegalArgumentException("an unknown-word model needs open tags, priors, a base distribution and ending tries");
     }
@@ -133,6 +142,7 @@ public final class UnknownWordModel {
       openOfBeginningCount[t] = openIndexes(beginningTries[t], openOfTag);
     }
     this.endingTries = endingTries.clone();
+    this.endingAlphabet = endingAlphabet;
     this.openOfCount = new int[endingTries.length][];
     for (int t = 0; t < endingTries.length; t++) {
       openOfCount[t] = openIndexes(endingTries[t], openOfTag);
@@ -233,7 +243,7 @@ public final class UnknownWordModel {
     AffixTrie trie = endingTries[t];
     int node = 0;
     int depth = 0;
-    for (int next; depth < Math.min(len, maxEndingLength) && (next = trie.child(node, buf[off + len - 1 - depth])) >= 0; depth++) {
+    for (int next; depth < Math.min(len, maxEndingLength) && (next = trie.child(node, endingAlphabet.fold(buf[off + len - 1 - depth]))) >= 0; depth++) {
       node = next;
     }
     double[] kept = (double[]) NODE.getAcquire(endingDistribution[t], node);
@@ -292,7 +302,7 @@ public final class UnknownWordModel {
     int node = 0;
     int depth = 0;
     while (depth < Math.min(len, maxEndingLength)) {
-      int next = trie.child(node, buf[off + len - 1 - depth]);
+      int next = trie.child(node, endingAlphabet.fold(buf[off + len - 1 - depth]));
       if (next < 0) {
         break;
       }
@@ -316,7 +326,7 @@ public final class UnknownWordModel {
     int count = 0;
     nodes[count++] = 0;
     for (int node = 0, next; count - 1 < Math.min(len, maxEndingLength)
-        && (next = trie.child(node, buf[off + len - count])) >= 0; node = next) {
+        && (next = trie.child(node, endingAlphabet.fold(buf[off + len - count]))) >= 0; node = next) {
       nodes[count++] = next;
     }
     return count;
@@ -456,6 +466,21 @@ public final class UnknownWordModel {
     return endingTries;
   }
 
+  /** How the endings are spelled that the model counts and looks up. */
+  public EndingAlphabet endingAlphabet() {
+    return endingAlphabet;
+  }
+
+  /**
+   * The oldest model file version that holds this model: {@link ModelFile#VERSION_ENDING_ALPHABET}
+   * if its endings are folded, else {@link ModelFile#VERSION_FIRST_WORD_BITS}, so that a model
+   * without the newer field keeps the bytes, and the readers, of the version before.
+   */
+  int formatVersion() {
+    return endingAlphabet == EndingAlphabet.AS_WRITTEN ? ModelFile.VERSION_FIRST_WORD_BITS
+        : ModelFile.VERSION_ENDING_ALPHABET;
+  }
+
   /** Longest word beginning consulted; 0 if the model does not look at beginnings. */
   public int maxBeginningLength() {
     return maxBeginningLength;
@@ -474,9 +499,15 @@ public final class UnknownWordModel {
   /**
    * Writes the model in the model file's layout ({@code docs/model-format.md}): θ, the open tags,
    * both prior rows, the base distribution, the tries of endings, the lower-case form cue behind
-   * a flag byte, then the longest beginning and, if positive, the two tries of beginnings.
+   * a flag byte, then the longest beginning and, if positive, the two tries of beginnings, and
+   * from {@link ModelFile#VERSION_ENDING_ALPHABET} the ending alphabet as a byte; {@code version}
+   * is the file's, at least {@link #formatVersion()}.
    */
-  void writeTo(DataOutput out) throws IOException {
+  void writeTo(DataOutput out, int version) throws IOException {
+    if (version < formatVersion()) {
+      throw new IllegalArgumentException("a model with ending alphabet " + endingAlphabet.optionName()
+          + " needs model file version " + formatVersion() + ", not " + version);
+    }
     out.writeLong(Double.doubleToLongBits(theta));
     out.writeVInt(maxEndingLength);
     out.writeVInt(openTags.length);
@@ -503,13 +534,17 @@ public final class UnknownWordModel {
         trie.writeTo(out);
       }
     }
+    if (version >= ModelFile.VERSION_ENDING_ALPHABET) {
+      out.writeByte((byte) endingAlphabet.ordinal());
+    }
   }
 
   /**
    * Reads a model {@link #writeTo} wrote in format {@code version}, checking every declared size
    * against the bytes left before allocating and every tag against {@code tagCount}. Before
    * {@link ModelFile#VERSION_CAPITALISED_PRIORS} a file has one prior row, which then serves
-   * both, and neither lower-case forms nor beginnings. The lower-case form cue looks its words up
+   * both, and neither lower-case forms nor beginnings; before {@link
+   * ModelFile#VERSION_ENDING_ALPHABET} endings are as written. The lower-case form cue looks its words up
    * in {@code lexicon}, over {@code states}.
    */
   static UnknownWordModel readFrom(DataInput in, ModelFile.Limits limits, int tagCount, int version, Lexicon lexicon,
@@ -539,8 +574,18 @@ public final class UnknownWordModel {
     int maxBeginning = fromVersion2 ? ModelFile.vInt(in) : 0;
     AffixTrie[] beginningTries = maxBeginning > 0
         ? new AffixTrie[] {AffixTrie.readFrom(in, limits, tagCount), AffixTrie.readFrom(in, limits, tagCount)} : null;
+    EndingAlphabet alphabet = version >= ModelFile.VERSION_ENDING_ALPHABET ? endingAlphabet(in.readByte(), limits)
+        : EndingAlphabet.AS_WRITTEN;
     return builder().theta(theta).openTags(open, base).logPriors(logPrior, logPriorCapitalised)
-        .endings(maxEnding, trieOfShape, tries).lowerCaseForms(cue).beginnings(maxBeginning, beginningTries).build();
+        .endings(maxEnding, trieOfShape, tries).lowerCaseForms(cue).beginnings(maxBeginning, beginningTries)
+        .endingAlphabet(alphabet).build();
+  }
+
+  private static EndingAlphabet endingAlphabet(byte code, ModelFile.Limits limits) throws IOException {
+    if (code < 0 || code >= EndingAlphabet.values().length) {
+      throw new org.apache.lucene.index.CorruptIndexException("unknown ending alphabet " + code, limits.name());
+    }
+    return EndingAlphabet.values()[code];
   }
 
   /** The cue of the lower-case forms of capitalised words, or null if the model has none. */
@@ -579,7 +624,7 @@ public final class UnknownWordModel {
   public Builder toBuilder() {
     return new Builder().theta(theta).endings(maxEndingLength, trieOfShape, endingTries).openTags(openTags, baseDistribution)
         .logPriors(logPrior, logPriorCapitalised).lowerCaseForms(lowerCaseForms)
-        .beginnings(maxBeginningLength, beginningTries);
+        .beginnings(maxBeginningLength, beginningTries).endingAlphabet(endingAlphabet);
   }
 
   /**
@@ -599,6 +644,7 @@ public final class UnknownWordModel {
     private LowerCaseFormCue lowerCaseForms;
     private int maxBeginningLength;
     private AffixTrie[] beginningTries;
+    private EndingAlphabet endingAlphabet = EndingAlphabet.AS_WRITTEN;
 
     private Builder() {}
 
@@ -659,6 +705,12 @@ public final class UnknownWordModel {
     public Builder beginnings(int maxLength, AffixTrie[] tries) {
       this.maxBeginningLength = maxLength;
       this.beginningTries = tries;
+      return this;
+    }
+
+    /** How the ending tries spell endings; {@link EndingAlphabet#AS_WRITTEN} unless set. */
+    public Builder endingAlphabet(EndingAlphabet alphabet) {
+      this.endingAlphabet = alphabet;
       return this;
     }
 

@@ -18,12 +18,31 @@ import org.wordclass.testing.TestModels;
  * what {@link ModelFile} writes, byte order included.
  */
 class DocumentedLayoutTest {
-  private final HmmModel model = TestModels.small();
-  private final byte[] bytes = TestModels.bytes(model);
-  private final ByteBuffer in = ByteBuffer.wrap(bytes).order(ByteOrder.LITTLE_ENDIAN);
+  private HmmModel model;
+  private byte[] bytes;
+  private ByteBuffer in;
+  private int version;
 
   @Test
   void fileFollowsTheDocumentedLayout() {
+    follow(TestModels.small(), 3);
+  }
+
+  /** A model with folded endings is the one kind written as version 4: the same layout and the alphabet byte. */
+  @Test
+  void foldedEndingsFollowTheDocumentedLayoutOfVersionFour() {
+    HmmModel small = TestModels.small();
+    HmmModel folded = new HmmModel(small.order(), small.tags(), small.states(), small.cues(), small.logBigramTable(),
+        small.logTrigramTable(), small.lexicon(),
+        small.unknownWords().toBuilder().endingAlphabet(EndingAlphabet.TURKISH_VOWEL_HARMONY).build(), small.provenance());
+    follow(folded, 4);
+  }
+
+  private void follow(HmmModel m, int expectedVersion) {
+    model = m;
+    bytes = TestModels.bytes(m);
+    in = ByteBuffer.wrap(bytes).order(ByteOrder.LITTLE_ENDIAN);
+    version = expectedVersion;
     header();
     assertEquals(model.provenance().size(), vint());
     for (var e : model.provenance().entrySet()) {
@@ -52,7 +71,7 @@ class DocumentedLayoutTest {
   }
 
   private void header() {
-    byte[] expected = {0x3f, (byte) 0xd7, 0x6c, 0x17, 0x0c, 'W', 'o', 'r', 'd', 'C', 'l', 'a', 's', 's', 'H', 'm', 'm', 0, 0, 0, 3};
+    byte[] expected = {0x3f, (byte) 0xd7, 0x6c, 0x17, 0x0c, 'W', 'o', 'r', 'd', 'C', 'l', 'a', 's', 's', 'H', 'm', 'm', 0, 0, 0, (byte) version};
     assertArrayEquals(expected, Arrays.copyOf(bytes, 21));
     in.position(21);
   }
@@ -105,6 +124,10 @@ class DocumentedLayoutTest {
       for (AffixTrie trie : u.beginningTries()) {
         trie(trie);
       }
+    }
+    if (version >= 4) {
+      // docs/model-format.md, ending alphabet: the EndingAlphabet ordinal
+      assertEquals(u.endingAlphabet().ordinal(), in.get());
     }
   }
 

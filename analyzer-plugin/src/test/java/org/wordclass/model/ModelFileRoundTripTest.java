@@ -126,10 +126,51 @@ class ModelFileRoundTripTest {
         out -> out.writeBytes(body, body.length));
     assertEquals(new HmmModel.DecodingCues(true, -0.5, false), ModelFile.read(versionTwo, "v2").cues());
     body[cueByte - header] = 7;
-    byte[] unknownBit = TestModels.withHeaderAndFooter(ModelFile.VERSION_CURRENT, out -> out.writeBytes(body, body.length));
+    byte[] unknownBit = TestModels.withHeaderAndFooter(ModelFile.VERSION_FIRST_WORD_BITS,
+        out -> out.writeBytes(body, body.length));
     ModelFormatException e = org.junit.jupiter.api.Assertions.assertThrows(ModelFormatException.class,
         () -> ModelFile.read(unknownBit, "bits"));
     org.junit.jupiter.api.Assertions.assertTrue(e.getMessage().contains("first-word cue bits 7"), e.getMessage());
+  }
+
+  /**
+   * A model with folded endings is written as version 4, its body that of the same model with
+   * endings as written (a version-3 file) plus the alphabet byte, and read back with its
+   * alphabet; an alphabet byte no alphabet has is refused.
+   */
+  @Test
+  void foldedEndingsAreWrittenAsVersionFourAndOthersAsVersionThree() throws IOException {
+    HmmModel plain = TestModels.small();
+    HmmModel folded = withUnknownWords(plain,
+        plain.unknownWords().toBuilder().endingAlphabet(EndingAlphabet.TURKISH_VOWEL_HARMONY).build());
+    byte[] a = TestModels.bytes(plain);
+    byte[] b = TestModels.bytes(folded);
+    int header = 21;
+    int footer = 16;
+    assertEquals(ModelFile.VERSION_FIRST_WORD_BITS, a[header - 1]);
+    assertEquals(ModelFile.VERSION_ENDING_ALPHABET, b[header - 1]);
+    assertEquals(a.length + 1, b.length);
+    assertArrayEquals(java.util.Arrays.copyOfRange(a, header, a.length - footer),
+        java.util.Arrays.copyOfRange(b, header, b.length - footer - 1), "the same body before the alphabet byte");
+    assertEquals(EndingAlphabet.TURKISH_VOWEL_HARMONY.ordinal(), b[b.length - footer - 1]);
+    HmmModel read = ModelFile.read(b, "folded");
+    assertSameModel(folded, read);
+    assertEquals(EndingAlphabet.TURKISH_VOWEL_HARMONY, read.unknownWords().endingAlphabet());
+    assertEquals(EndingAlphabet.AS_WRITTEN, ModelFile.read(a, "plain").unknownWords().endingAlphabet());
+    assertArrayEquals(b, TestModels.bytes(read), "written again as it was read");
+
+    byte[] body = java.util.Arrays.copyOfRange(b, header, b.length - footer);
+    body[body.length - 1] = 9;
+    byte[] unknownAlphabet = TestModels.withHeaderAndFooter(ModelFile.VERSION_ENDING_ALPHABET,
+        out -> out.writeBytes(body, body.length));
+    ModelFormatException e = org.junit.jupiter.api.Assertions.assertThrows(ModelFormatException.class,
+        () -> ModelFile.read(unknownAlphabet, "alphabet"));
+    org.junit.jupiter.api.Assertions.assertTrue(e.getMessage().contains("unknown ending alphabet 9"), e.getMessage());
+  }
+
+  private static HmmModel withUnknownWords(HmmModel m, UnknownWordModel unknown) {
+    return new HmmModel(m.order(), m.tags(), m.states(), m.cues(), m.logBigramTable(), m.logTrigramTable(), m.lexicon(),
+        unknown, m.provenance());
   }
 
   private static HmmModel withCues(HmmModel m, HmmModel.DecodingCues cues) {
@@ -200,6 +241,7 @@ class ModelFileRoundTripTest {
     assertArrayEquals(expected.logPrior(), actual.logPrior());
     assertArrayEquals(expected.logPriorCapitalised(), actual.logPriorCapitalised());
     assertEquals(expected.maxBeginningLength(), actual.maxBeginningLength());
+    assertEquals(expected.endingAlphabet(), actual.endingAlphabet());
     for (int i = 0; expected.maxBeginningLength() > 0 && i < 2; i++) {
       assertSameTrie(expected.beginningTries()[i], actual.beginningTries()[i]);
     }

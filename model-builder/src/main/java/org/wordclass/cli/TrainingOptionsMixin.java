@@ -2,6 +2,7 @@ package org.wordclass.cli;
 
 import java.lang.reflect.Field;
 import java.util.Locale;
+import org.wordclass.model.EndingAlphabet;
 import org.wordclass.training.TrainingOptions;
 import picocli.CommandLine.IDefaultValueProvider;
 import picocli.CommandLine.Model.ArgSpec;
@@ -108,6 +109,13 @@ final class TrainingOptionsMixin {
           + "Default: ${DEFAULT-VALUE}.")
   double minTagShare;
 
+  @Option(names = "--ending-alphabet", paramLabel = "as-written|turkish-vowel-harmony|finnish-vowel-harmony",
+      description = "How the unknown-word model spells the endings it counts: as written, or with the vowels "
+          + "a language's suffixes alternate by vowel harmony folded together, so that the variants of one "
+          + "suffix share their counts: Turkish e with a; i, u, ü with ı; ö with o (-da and -de, -ın, -in, "
+          + "-un and -ün); Finnish ä with a, ö with o, y with u (-ssa and -ssä). Default: ${DEFAULT-VALUE}.")
+  String endingAlphabet;
+
   /** The options given; a value the estimator refuses is reported as a usage error. */
   TrainingOptions toOptions() {
     try {
@@ -117,11 +125,24 @@ final class TrainingOptionsMixin {
           .contextEmissions(contextEmissions).lowercaseFirstWord(lowercaseFirstWord).contextMinCount(contextMinCount)
           .latentRounds(latentRounds).unknownWordPrior(unknownWordPrior(unknownWordPrior)).lowerCaseForms(lowerCaseForms)
           .maxPrefixLength(maxPrefixLength).minTagShare(minTagShare)
-          .lowercaseMidSentenceFirstWord(lowercaseMidSentenceFirstWord).build();
+          .lowercaseMidSentenceFirstWord(lowercaseMidSentenceFirstWord).endingAlphabet(endingAlphabet(endingAlphabet))
+          .build();
       return withSuffixWeight(options, suffixWeight);
     } catch (IllegalArgumentException e) {
       throw new ParameterException(mixee.commandLine(), "Invalid training option: " + e.getMessage());
     }
+  }
+
+  /** Reads an alphabet's name as {@link TrainingOptions#describe()} writes it. */
+  private EndingAlphabet endingAlphabet(String value) {
+    for (EndingAlphabet alphabet : EndingAlphabet.values()) {
+      if (value.equalsIgnoreCase(alphabet.optionName())) {
+        return alphabet;
+      }
+    }
+    throw new ParameterException(mixee.commandLine(),
+        "Invalid value for --ending-alphabet: '" + value + "' is not one of " + java.util.Arrays.stream(
+            EndingAlphabet.values()).map(EndingAlphabet::optionName).collect(java.util.stream.Collectors.joining(", ")));
   }
 
   /** Reads a prior's name as {@link TrainingOptions#describe()} writes it. */
@@ -152,7 +173,7 @@ final class TrainingOptionsMixin {
   }
 
   /**
-   * Defaults of the options above, taken from {@link TrainingOptions#describe()} of the defaults:
+   * Defaults of the options above, taken from {@link TrainingOptions#describeAll()} of the defaults:
    * {@code --max-suffix-length} reads {@code option.maxSuffixLength}, and so on.
    */
   static final class Defaults implements IDefaultValueProvider {
@@ -163,7 +184,7 @@ final class TrainingOptionsMixin {
           || field.getDeclaringClass() != TrainingOptionsMixin.class) {
         return null;
       }
-      return TrainingOptions.DEFAULTS.describe().get("option." + camelCase(option.longestName()));
+      return TrainingOptions.DEFAULTS.describeAll().get("option." + camelCase(option.longestName()));
     }
 
     /** {@code --max-suffix-length} to {@code maxSuffixLength}. */

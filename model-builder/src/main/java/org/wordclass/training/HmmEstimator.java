@@ -236,9 +236,10 @@ public final class HmmEstimator {
       AffixTrie.Builder trie = builders[trieOfShape[shape.ordinal()]];
       boolean capitalised = shape.capitalisationOnly() == WordShape.CAPITALISED;
       String beginnings = options.maxPrefixLength() > 0 ? lowerCasedReversed(chars) : null;
+      String endings = options.endingAlphabet().fold(w);
       for (Map.Entry<Integer, Integer> e : new TreeMap<>(word.getValue()).entrySet()) {
         int tag = finalId[e.getKey() + 1];
-        trie.add(w, tag, e.getValue(), options.maxSuffixLength());
+        trie.add(endings, tag, e.getValue(), options.maxSuffixLength());
         if (options.maxPrefixLength() > 0) {
           beginningBuilders[capitalised ? 1 : 0].add(beginnings, tag, e.getValue(), options.maxPrefixLength());
         }
@@ -260,7 +261,8 @@ public final class HmmEstimator {
       tries[i] = builders[i].build();
     }
     UnknownWordModel model = UnknownWordModel.builder().theta(1.0).openTags(openTags, base)
-        .logPriors(logPrior, logPriorCapitalised).endings(options.maxSuffixLength(), trieOfShape, tries).build();
+        .logPriors(logPrior, logPriorCapitalised).endings(options.maxSuffixLength(), trieOfShape, tries)
+        .endingAlphabet(options.endingAlphabet()).build();
     double theta = switch (options.suffixWeightRule()) {
       case HELD_OUT -> SuffixWeightSelection.choose(model, wordTags, finalId, options.rareWordMaxCount());
       case TAG_SPREAD -> tagProbabilitySpread(tagTokens, total);

@@ -4,6 +4,7 @@ import java.util.LinkedHashMap;
 import java.util.Locale;
 import java.util.Map;
 import java.util.function.Consumer;
+import org.wordclass.model.EndingAlphabet;
 
 /**
  * Everything that shapes a trained model besides its corpus. Every value is written into the
@@ -46,6 +47,8 @@ import java.util.function.Consumer;
  *     ("the" as a proper noun), are left out of the lexicon, which spares the decoder their
  *     candidates. With n occurrences a pair seen once goes only where n exceeds 1 / share, so
  *     rare words are never touched. 0 keeps every pair
+ * @param endingAlphabet how the unknown-word model spells the endings it counts and looks up: as
+ *     written, or with the vowels of a language's vowel harmony folded ({@link EndingAlphabet})
  */
 public record TrainingOptions(
     int order,
@@ -64,13 +67,14 @@ public record TrainingOptions(
     boolean lowerCaseForms,
     int maxPrefixLength,
     double minTagShare,
-    boolean lowercaseMidSentenceFirstWord) {
+    boolean lowercaseMidSentenceFirstWord,
+    EndingAlphabet endingAlphabet) {
 
   public static final TrainingOptions DEFAULTS = new Builder().order(2).maxSuffixLength(10).rareWordMaxCount(10)
       .suffixWeightRule(SuffixWeightRule.HELD_OUT).openClassMinShare(0.002).shapeClasses(false)
       .capitalisationStates(true).contextEmissions(true).lowercaseFirstWord(true).contextMinCount(3).latentRounds(0)
       .unknownWordPrior(UnknownWordPrior.LOWER_CASE_STATE).lowerCaseForms(true).maxPrefixLength(4).minTagShare(0.002)
-      .lowercaseMidSentenceFirstWord(true).build();
+      .lowercaseMidSentenceFirstWord(true).endingAlphabet(EndingAlphabet.AS_WRITTEN).build();
 
   /** The classic second-order model with a suffix model and none of the later cues. */
   public static final TrainingOptions CLASSIC =
@@ -113,6 +117,9 @@ public record TrainingOptions(
   public TrainingOptions {
     if (unknownWordPrior == null) {
       throw new IllegalArgumentException("an unknown-word prior must be given");
+    }
+    if (endingAlphabet == null) {
+      throw new IllegalArgumentException("an ending alphabet must be given");
     }
     if (order != 1 && order != 2) {
       throw new IllegalArgumentException("order must be 1 or 2, not " + order);
@@ -212,6 +219,11 @@ public record TrainingOptions(
     return copy(b -> b.lowercaseMidSentenceFirstWord = use);
   }
 
+  /** How the unknown-word model spells endings. */
+  public TrainingOptions withEndingAlphabet(EndingAlphabet alphabet) {
+    return copy(b -> b.endingAlphabet = alphabet);
+  }
+
   /** The lexicon's minimum tag share (0 keeps every word/tag pair). */
   public TrainingOptions withMinTagShare(double share) {
     return copy(b -> b.minTagShare = share);
@@ -257,6 +269,7 @@ public record TrainingOptions(
     private int maxPrefixLength;
     private double minTagShare;
     private boolean lowercaseMidSentenceFirstWord;
+    private EndingAlphabet endingAlphabet;
 
     private Builder() {
       suffixWeight = Double.NaN;
@@ -280,6 +293,7 @@ public record TrainingOptions(
       maxPrefixLength = o.maxPrefixLength;
       minTagShare = o.minTagShare;
       lowercaseMidSentenceFirstWord = o.lowercaseMidSentenceFirstWord;
+      endingAlphabet = o.endingAlphabet;
     }
 
     public Builder order(int value) {
@@ -371,16 +385,35 @@ public record TrainingOptions(
       return this;
     }
 
+    public Builder endingAlphabet(EndingAlphabet value) {
+      endingAlphabet = value;
+      return this;
+    }
+
     /** @throws IllegalArgumentException for a value or a combination the record refuses */
     public TrainingOptions build() {
       return new TrainingOptions(order, maxSuffixLength, rareWordMaxCount, suffixWeightRule, suffixWeight,
           openClassMinShare, shapeClasses, capitalisationStates, contextEmissions, lowercaseFirstWord, contextMinCount,
-          latentRounds, unknownWordPrior, lowerCaseForms, maxPrefixLength, minTagShare, lowercaseMidSentenceFirstWord);
+          latentRounds, unknownWordPrior, lowerCaseForms, maxPrefixLength, minTagShare, lowercaseMidSentenceFirstWord,
+          endingAlphabet);
     }
   }
 
-  /** The options as provenance entries. */
+  /**
+   * The options as provenance entries. The ending alphabet is named only where endings are
+   * folded: a model with endings as written keeps the provenance, and the bytes, it had before
+   * the option existed ({@link #describeAll()} names it always).
+   */
   public Map<String, String> describe() {
+    Map<String, String> m = describeAll();
+    if (endingAlphabet == EndingAlphabet.AS_WRITTEN) {
+      m.remove("option.endingAlphabet");
+    }
+    return m;
+  }
+
+  /** Every option by name, as {@link #describe()} writes them, the ending alphabet included. */
+  public Map<String, String> describeAll() {
     Map<String, String> m = new LinkedHashMap<>();
     m.put("option.order", Integer.toString(order));
     m.put("option.maxSuffixLength", Integer.toString(maxSuffixLength));
@@ -399,6 +432,7 @@ public record TrainingOptions(
     m.put("option.lowerCaseForms", Boolean.toString(lowerCaseForms));
     m.put("option.unknownWordPrior", unknownWordPrior.name().toLowerCase(Locale.ROOT).replace('_', '-'));
     m.put("option.minTagShare", Double.toString(minTagShare));
+    m.put("option.endingAlphabet", endingAlphabet.optionName());
     return m;
   }
 }

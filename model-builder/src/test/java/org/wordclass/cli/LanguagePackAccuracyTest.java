@@ -19,8 +19,9 @@ import org.wordclass.testing.Corpora;
  * commonest tag in training; unseen words: the commonest tag of all; common practice), and at
  * least 1.5 points better than the stronger baseline that guesses unseen words from their ending
  * with the model's own unknown-word model (what the HMM's context adds). The floors sit just under
- * the figures measured for docs/languages.md, and at 0.85 or above except for Turkish (measured
- * 0.8460: the one language of the pack below 0.85; see docs/languages.md).
+ * the figures measured for docs/languages.md, and at 0.85 or above: the target of the language
+ * pack. Turkish, measured at 0.8506 since its endings are counted with vowel harmony folded, sits
+ * closest to it: 8,516 of 10,012 tokens right, 5 more than its floor, 0.85, asks for.
  */
 class LanguagePackAccuracyTest {
   /** Per language: floor on test through the chain (measured figure, less about half a point). */
@@ -28,10 +29,10 @@ class LanguagePackAccuracyTest {
       Map.entry("cs", 0.91), Map.entry("de", 0.90), Map.entry("es", 0.915), Map.entry("fi", 0.87),
       Map.entry("fr", 0.91), Map.entry("id", 0.89), Map.entry("it", 0.91), Map.entry("nb", 0.925),
       Map.entry("nl", 0.875), Map.entry("pt", 0.94), Map.entry("ru", 0.91), Map.entry("sv", 0.885),
-      Map.entry("tr", 0.84));
+      Map.entry("tr", 0.85));
 
-  /** The one language whose measured accuracy is under 0.85; its floor sits under its own figure. */
-  private static final String BELOW_TARGET = "tr";
+  /** The pack's target: no floor is under it. */
+  private static final double TARGET = 0.85;
 
   static Stream<String> languages() throws IOException {
     return PackMeasure.recipe().entries().stream().map(PackRecipe.Entry::language);
@@ -51,7 +52,7 @@ class LanguagePackAccuracyTest {
         + "(unseen words by ending %.4f)%n", language, accuracy, f.chain().tokens(), baseline, byEndings);
     assertEquals(f.chain().tokens(), f.baseline().tokens(), "the baseline is scored on the same tokens");
     assertTrue(FLOORS.containsKey(language), "no floor for " + language);
-    double floor = language.equals(BELOW_TARGET) ? FLOORS.get(language) : Math.max(0.85, FLOORS.get(language));
+    double floor = Math.max(TARGET, FLOORS.get(language));
     assertTrue(accuracy >= floor, language + ": test accuracy through the chain " + accuracy + " < floor " + floor);
     assertTrue(accuracy >= baseline + 0.05,
         language + ": " + accuracy + " is not 5 points above the most-frequent-tag baseline " + baseline);
