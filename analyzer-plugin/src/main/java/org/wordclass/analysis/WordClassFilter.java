@@ -68,6 +68,12 @@ import org.wordclass.model.WordShape;
  * all its tokens get that word's class, confidence and explanation. A run cut by the window
  * starts afresh after the cut. Chains without the attribute decode token by token.
  *
+ * <p>With {@link WordClassOptions#boundaries()} {@code DECODED}, the decoder also finds sentence
+ * boundaries the tokenizer missed (a heading or a line without a full stop before the next
+ * sentence): before each capitalised token it weighs the token as the first word of a new
+ * sentence against the token in mid-sentence, in the same Viterbi pass that chooses the classes
+ * (see {@link SentenceBoundaries}).
+ *
  * <h2>Where it belongs in a chain</h2>
  *
  * Right after the tokenizer, before lowercasing, stemming and stop words: capital letters and
@@ -154,7 +160,7 @@ public final class WordClassFilter extends TokenFilter {
     this.options = options;
     this.tags = options.model().tags();
     this.modelName = options.model().name();
-    this.decoder = new Decoder(options.model(), options.order());
+    this.decoder = new Decoder(options.model(), options.order(), options.boundaries());
     this.lattice = decoder.lattice();
     this.positions = new RunPositions(lattice);
     this.runAtt = hasAttribute(WrittenTogetherAttribute.class) ? getAttribute(WrittenTogetherAttribute.class) : null;
@@ -270,7 +276,7 @@ public final class WordClassFilter extends TokenFilter {
 
   /** Fills the explanation from lattice position {@code p}: the token's own, or that of the run it belongs to. */
   private void explain(int p) {
-    CandidateSource source = lattice.source(p);
+    CandidateSource source = lattice.source(p, best[p]);
     char[] text = positions.text();
     int start = positions.textStart(p);
     int end = positions.textEnd(p);
