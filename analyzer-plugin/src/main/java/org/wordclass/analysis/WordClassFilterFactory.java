@@ -69,8 +69,8 @@ import org.wordclass.model.UserLexicon;
  *   <li>{@code boundaries}: {@code decoded} to let the decoder find sentence boundaries the
  *       tokenizer did not mark, before capitalised tokens, together with the classes ({@link
  *       SentenceBoundaries#DECODED}); {@code tokenizer} to decode each marked sentence (each
- *       field value, with a tokenizer that marks none) as one sentence. Default {@code
- *       tokenizer}.
+ *       field value, with a tokenizer that marks none) as one sentence, as before this
+ *       argument existed. Default {@code decoded} (chosen on EWT dev: docs/accuracy.md).
  * </ul>
  *
  * Malformed or unknown arguments fail when the factory is constructed, naming the argument.

@@ -28,7 +28,7 @@ final class EvaluateCommand extends BaseCommand {
   AnalyzerOptions analysis;
 
   @Option(names = "--boundaries", paramLabel = "WHERE", converter = BoundariesConverter.class,
-      defaultValue = "tokenizer",
+      defaultValue = "decoded",
       description = "tokenizer: decode each sentence (each piece the chain's tokenizer marks) as one; decoded: let "
           + "the decoder find sentence boundaries inside it as well, before capitalised tokens, as the filter's "
           + "boundaries argument does. Default: ${DEFAULT-VALUE}.")

@@ -82,7 +82,7 @@ final class TagCommand extends BaseCommand {
   boolean json;
 
   @Option(names = "--boundaries", paramLabel = "WHERE", converter = BoundariesConverter.class,
-      defaultValue = "tokenizer",
+      defaultValue = "decoded",
       description = "The filter's boundaries argument: tokenizer decodes each sentence the tokenizer marks as one; "
           + "decoded lets the decoder find sentence boundaries it missed, before capitalised tokens. "
           + "Default: ${DEFAULT-VALUE}.")
