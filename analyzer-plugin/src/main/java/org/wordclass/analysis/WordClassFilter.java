@@ -271,6 +271,8 @@ public final class WordClassFilter extends TokenFilter {
     }
     if (explanationAtt != null) {
       explain(p);
+      // a run opens a sentence at its first token only
+      explanationAtt.setOpensSentence(lattice.opensSentence(p, best[p]) && (i == 0 || positions.positionOf(i - 1) != p));
     }
   }
 
