@@ -88,7 +88,9 @@ import org.wordclass.model.WordShape;
  * the bundled English model on web text the decoder takes roughly 0.2 microseconds per token at
  * order 1 and 0.3 at order 2, and the whole filter about 0.4 at order 2: several times what
  * Lucene's standard tokenizer and lower-casing cost together; confidence (a forward-backward
- * pass) about doubles the decoding (figures and method in docs/performance.md). Memory is bounded
+ * pass) about doubles the decoding (figures and method in docs/performance.md). Decoded sentence
+ * boundaries (the default) give capitalised tokens a second reading and cost about a fifth of the
+ * filter's speed; {@code boundaries="tokenizer"} does without them. Memory is bounded
  * by the window: one pooled copy of the token's attributes per buffered token, kept for the life
  * of the filter, plus the decoder's buffers, a few kilobytes per token of the window at most.
  * Steady-state filtering allocates nothing per token, unless upstream payloads must be copied.
