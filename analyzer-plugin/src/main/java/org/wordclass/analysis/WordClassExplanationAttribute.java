@@ -27,6 +27,16 @@ public interface WordClassExplanationAttribute extends Attribute {
   /** For {@link CandidateSource#UNKNOWN}, the spelling shape whose ending counts scored the token; else null. */
   WordShape getShape();
 
+  /**
+   * Whether the decoder found that the token opens a sentence the tokenizer did not mark (decoded
+   * sentence boundaries, {@link WordClassOptions#boundaries()}): it was read as the first word of a
+   * new sentence, not in mid-sentence. False for the first token of a marked sentence.
+   */
+  boolean opensSentence();
+
+  /** Sets {@link #opensSentence()}. */
+  void setOpensSentence(boolean opensSentence);
+
   /** Number of classes {@link #getClassProbability} answers for: the model's tag-set size, 0 when not explained. */
   int getClassCount();
 

@@ -8,7 +8,7 @@ import org.wordclass.decoding.CandidateSource;
 import org.wordclass.model.WordShape;
 
 /**
- * Default implementation of {@link WordClassExplanationAttribute}: four references and an array of
+ * Default implementation of {@link WordClassExplanationAttribute}: four references, a flag and an array of
  * class probabilities that is reused from token to token (copies and clones copy it).
  */
 public class WordClassExplanationAttributeImpl extends AttributeImpl implements WordClassExplanationAttribute {
@@ -18,6 +18,7 @@ public class WordClassExplanationAttributeImpl extends AttributeImpl implements 
   private String lookedUpAs;
   private String ending;
   private WordShape shape;
+  private boolean opensSentence;
   private double[] probabilities = NONE;
   private int classCount;
 
@@ -39,6 +40,16 @@ public class WordClassExplanationAttributeImpl extends AttributeImpl implements 
   @Override
   public WordShape getShape() {
     return shape;
+  }
+
+  @Override
+  public boolean opensSentence() {
+    return opensSentence;
+  }
+
+  @Override
+  public void setOpensSentence(boolean opensSentence) {
+    this.opensSentence = opensSentence;
   }
 
   @Override
@@ -72,6 +83,7 @@ public class WordClassExplanationAttributeImpl extends AttributeImpl implements 
   @Override
   public void clear() {
     setSource(null, null, null, null);
+    opensSentence = false;
     classCount = 0;
   }
 
@@ -79,6 +91,7 @@ public class WordClassExplanationAttributeImpl extends AttributeImpl implements 
   public void copyTo(AttributeImpl target) {
     WordClassExplanationAttribute other = (WordClassExplanationAttribute) target;
     other.setSource(source, lookedUpAs, ending, shape);
+    other.setOpensSentence(opensSentence);
     System.arraycopy(probabilities, 0, other.classProbabilities(classCount), 0, classCount);
   }
 
@@ -95,6 +108,7 @@ public class WordClassExplanationAttributeImpl extends AttributeImpl implements 
     reflector.reflect(WordClassExplanationAttribute.class, "lookedUpAs", lookedUpAs);
     reflector.reflect(WordClassExplanationAttribute.class, "ending", ending);
     reflector.reflect(WordClassExplanationAttribute.class, "shape", shape);
+    reflector.reflect(WordClassExplanationAttribute.class, "opensSentence", opensSentence);
     reflector.reflect(WordClassExplanationAttribute.class, "classProbabilities", Arrays.copyOf(probabilities, classCount));
   }
 
@@ -108,6 +122,7 @@ public class WordClassExplanationAttributeImpl extends AttributeImpl implements 
     }
     return source == that.source
         && shape == that.shape
+        && opensSentence == that.opensSentence
         && Objects.equals(lookedUpAs, that.lookedUpAs)
         && Objects.equals(ending, that.ending)
         && Arrays.equals(probabilities, 0, classCount, that.probabilities, 0, that.classCount);
@@ -115,7 +130,7 @@ public class WordClassExplanationAttributeImpl extends AttributeImpl implements 
 
   @Override
   public int hashCode() {
-    int h = Objects.hash(source, lookedUpAs, ending, shape);
+    int h = Objects.hash(source, lookedUpAs, ending, shape, opensSentence);
     for (int i = 0; i < classCount; i++) {
       h = 31 * h + Double.hashCode(probabilities[i]);
     }

@@ -68,6 +68,12 @@ import org.wordclass.model.WordShape;
  * all its tokens get that word's class, confidence and explanation. A run cut by the window
  * starts afresh after the cut. Chains without the attribute decode token by token.
  *
+ * <p>With {@link WordClassOptions#boundaries()} {@code DECODED}, the decoder also finds sentence
+ * boundaries the tokenizer missed (a heading or a line without a full stop before the next
+ * sentence): before each capitalised token it weighs the token as the first word of a new
+ * sentence against the token in mid-sentence, in the same Viterbi pass that chooses the classes
+ * (see {@link SentenceBoundaries}).
+ *
  * <h2>Where it belongs in a chain</h2>
  *
  * Right after the tokenizer, before lowercasing, stemming and stop words: capital letters and
@@ -82,7 +88,9 @@ import org.wordclass.model.WordShape;
  * the bundled English model on web text the decoder takes roughly 0.2 microseconds per token at
  * order 1 and 0.3 at order 2, and the whole filter about 0.4 at order 2: several times what
  * Lucene's standard tokenizer and lower-casing cost together; confidence (a forward-backward
- * pass) about doubles the decoding (figures and method in docs/performance.md). Memory is bounded
+ * pass) about doubles the decoding (figures and method in docs/performance.md). Decoded sentence
+ * boundaries (the default) give capitalised tokens a second reading and cost about a fifth of the
+ * filter's speed; {@code boundaries="tokenizer"} does without them. Memory is bounded
  * by the window: one pooled copy of the token's attributes per buffered token, kept for the life
  * of the filter, plus the decoder's buffers, a few kilobytes per token of the window at most.
  * Steady-state filtering allocates nothing per token, unless upstream payloads must be copied.
@@ -154,7 +162,7 @@ public final class WordClassFilter extends TokenFilter {
     this.options = options;
     this.tags = options.model().tags();
     this.modelName = options.model().name();
-    this.decoder = new Decoder(options.model(), options.order());
+    this.decoder = new Decoder(options.model(), options.order(), options.boundaries());
     this.lattice = decoder.lattice();
     this.positions = new RunPositions(lattice);
     this.runAtt = hasAttribute(WrittenTogetherAttribute.class) ? getAttribute(WrittenTogetherAttribute.class) : null;
@@ -265,6 +273,8 @@ public final class WordClassFilter extends TokenFilter {
     }
     if (explanationAtt != null) {
       explain(p);
+      // a run opens a sentence at its first token only
+      explanationAtt.setOpensSentence(lattice.opensSentence(p, best[p]) && (i == 0 || positions.positionOf(i - 1) != p));
     }
   }
 
@@ -273,7 +283,7 @@ public final class WordClassFilter extends TokenFilter {
    * restored in {@link #termAtt}, or of the run it belongs to.
    */
   private void explain(int p) {
-    CandidateSource source = lattice.source(p);
+    CandidateSource source = lattice.source(p, best[p]);
     boolean run = positions.isRun(p);
     char[] text = run ? positions.text() : termAtt.buffer();
     int start = run ? positions.runStart(p) : 0;

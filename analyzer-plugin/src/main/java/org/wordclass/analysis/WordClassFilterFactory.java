@@ -11,6 +11,7 @@ import org.apache.lucene.analysis.TokenFilterFactory;
 import org.apache.lucene.analysis.TokenStream;
 import org.apache.lucene.util.ResourceLoader;
 import org.apache.lucene.util.ResourceLoaderAware;
+import org.wordclass.decoding.SentenceBoundaries;
 import org.wordclass.model.DefaultModel;
 import org.wordclass.model.HmmModel;
 import org.wordclass.model.LexiconFormatException;
@@ -65,6 +66,11 @@ import org.wordclass.model.UserLexicon;
  *   <li>{@code separator}: what joins word and class in qualified terms; default {@code _}.
  *   <li>{@code maxWindow}: the most tokens decoded together (a longer sentence is cut, see
  *       {@link WordClassFilter}); default {@value WordClassOptions#DEFAULT_MAX_WINDOW}.
+ *   <li>{@code boundaries}: {@code decoded} to let the decoder find sentence boundaries the
+ *       tokenizer did not mark, before capitalised tokens, together with the classes ({@link
+ *       SentenceBoundaries#DECODED}); {@code tokenizer} to decode each marked sentence (each
+ *       field value, with a tokenizer that marks none) as one sentence, as before this
+ *       argument existed. Default {@code decoded} (chosen on EWT dev: docs/accuracy.md).
  * </ul>
  *
  * Malformed or unknown arguments fail when the factory is constructed, naming the argument.
@@ -92,6 +98,7 @@ public class WordClassFilterFactory extends TokenFilterFactory implements Resour
   private final boolean qualifiedTerms;
   private final String separator;
   private final int maxWindow;
+  private final SentenceBoundaries boundaries;
 
   private volatile WordClassOptions options;
 
@@ -135,6 +142,8 @@ public class WordClassFilterFactory extends TokenFilterFactory implements Resour
       throw new IllegalArgumentException("'separator' must not be empty");
     }
     maxWindow = positiveIntArg(args, "maxWindow", WordClassOptions.DEFAULT_MAX_WINDOW);
+    boundaries = SentenceBoundaries.parse(get(args, "boundaries", List.of("tokenizer", "decoded"),
+        WordClassOptions.DEFAULT_BOUNDARIES.argument(), false), "boundaries");
     if (!args.isEmpty()) {
       throw new IllegalArgumentException("Unknown parameters: " + args);
     }
@@ -228,7 +237,8 @@ public class WordClassFilterFactory extends TokenFilterFactory implements Resour
         .withWeights(ClassWeights.of(model.tags(), weights, defaultWeight, "weights"))
         .withQualifiedTerms(qualifiedTerms)
         .withSeparator(separator)
-        .withMaxWindow(maxWindow);
+        .withMaxWindow(maxWindow)
+        .withBoundaries(boundaries);
   }
 
   private static HmmModel load(ResourceLoader loader, String name) throws IOException {

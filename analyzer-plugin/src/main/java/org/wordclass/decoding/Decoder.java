@@ -19,6 +19,15 @@ import org.wordclass.model.HmmModel;
  * position's first cell and strides ({@code start + j * stride + k}, the same form for cells and
  * emissions) rather than working the layout out themselves.
  *
+ * <p>With {@link SentenceBoundaries#DECODED} the lattice gives capitalised tokens a first-word
+ * reading as well, and the kernels decode sentence boundaries with the tags: a transition into a
+ * candidate that opens a sentence is the end of the sentence before ({@code </s>} after the
+ * history) times the start of a new one ({@code <s>}, or {@code <s> <s>} at order 2, before the
+ * candidate), and the history of the token after it begins at the boundary. Viterbi so finds the
+ * most probable segmentation and tagging together; a tag's posterior sums both readings. The
+ * cost is that of the extra candidates, plus one pass over the candidates per sequence that has
+ * them; a lattice without them is decoded exactly as before, bit for bit.
+ *
  * <p>Not thread-safe: one per thread; the model it reads is shared.
  */
 public final class Decoder {
@@ -48,6 +57,13 @@ public final class Decoder {
    * 1, two before at order 2): the offset of its row or plane in the transition table.
    */
   private int[] planeOf = new int[16];
+  /** {@link #planeOf} for a row whose candidate at the position before opens a sentence: the boundary's plane for every h. */
+  private int[] boundaryPlanes = new int[0];
+  /** Per candidate, the state a transition into it leads to ({@link Trellis#enteredAt}); filled when the lattice has openings. */
+  private int[] entered = new int[256];
+  /** Per candidate that opens a sentence, the start of the new sentence before it, as a log-probability and as a probability. */
+  private double[] openingLog = new double[256];
+  private double[] openingWeight = new double[256];
   private double bestLogProbability;
   private double lastLogLikelihood = Double.NEGATIVE_INFINITY;
   private double maxEmissionSum;
@@ -58,12 +74,17 @@ public final class Decoder {
   }
 
   public Decoder(HmmModel model, int order) {
+    this(model, order, SentenceBoundaries.TOKENIZER);
+  }
+
+  /** A decoder that finds sentence boundaries inside a sequence as well, if {@code boundaries} says so. */
+  public Decoder(HmmModel model, int order, SentenceBoundaries boundaries) {
     if (order != 1 && order != 2) {
       throw new IllegalArgumentException("order must be 1 or 2, not " + order);
     }
     this.model = model;
     this.order = order;
-    this.lattice = new Lattice(model);
+    this.lattice = new Lattice(model, boundaries);
     this.states = model.states().size() + 1;
     this.boundary = model.boundary();
     this.logBigram = model.logBigramFloats();
@@ -108,7 +129,40 @@ public final class Decoder {
     if (scaledEmission.length < pairs) {
       scaledEmission = new double[Math.max(pairs, scaledEmission.length * 2)];
     }
+    if (lattice.openings() > 0) {
+      prepareOpenings(n, candidates);
+    }
     return total;
+  }
+
+  /** Fills {@link #entered}, {@link #openingLog} and {@link #openingWeight} for the lattice's candidates. */
+  private void prepareOpenings(int n, int candidates) {
+    if (entered.length < candidates) {
+      int grown = Math.max(candidates, entered.length * 2);
+      entered = new int[grown];
+      openingLog = new double[grown];
+      openingWeight = new double[grown];
+    }
+    System.arraycopy(lattice.candidateStates(), 0, entered, 0, candidates);
+    int start = order == 2 ? (boundary * states + boundary) * states : boundary * states;
+    for (int i = 1; i < n; i++) {
+      int offset = lattice.candidateOffset(i);
+      for (int k = lattice.openingFrom(i); k < lattice.candidateCount(i); k++) {
+        int state = entered[offset + k];
+        entered[offset + k] = boundary;
+        openingLog[offset + k] = order == 2 ? logTrigram[start + state] : logBigram[start + state];
+        openingWeight[offset + k] = order == 2 ? trigram[start + state] : bigram[start + state];
+      }
+    }
+  }
+
+  /** The boundary's plane in the trigram table, {@code kh} times, for rows after a candidate that opens a sentence. */
+  private int[] boundaryPlanes(int kh) {
+    if (boundaryPlanes.length < kh) {
+      boundaryPlanes = new int[Math.max(kh, 2 * boundaryPlanes.length)];
+      Arrays.fill(boundaryPlanes, boundary * states * states);
+    }
+    return boundaryPlanes;
   }
 
   /**
@@ -139,10 +193,15 @@ public final class Decoder {
    * loop runs with the transition read from the trigram table. The emission of a cell follows
    * the predecessor at order 1 (context rows by the previous candidate) and the row j at order 2.
    * Sums are (score + transition) + emission in both cases, as in the kernels it replaces.
+   *
+   * <p>A candidate that opens a sentence is entered at the boundary state (the end of the
+   * sentence before, {@link #entered}), and the start of its own sentence is added once the best
+   * predecessor is found; the rows after such a candidate read the boundary's plane instead of
+   * their predecessors' (its history starts at the boundary).
    */
   private void viterbiOverCells(int[] best, int n) {
     double[] emissions = lattice.pairLogEmissions();
-    int[] current = lattice.candidateStates();
+    int[] current = lattice.openings() == 0 ? lattice.candidateStates() : entered;
     boolean pairs = order == 2;
     float[] transition = pairs ? logTrigram : logBigram;
     int plane = pairs ? states * states : states;
@@ -171,7 +230,10 @@ public final class Decoder {
       int emit = trellis.emissionStart(i);
       int stride = trellis.emissionStride(i);
       int emitByPred = pairs ? 0 : stride;
+      int opensFrom = trellis.openingFrom(i);
+      int rowsOpenFrom = pairs ? trellis.openingFrom(i - 1) : rows;
       for (int j = 0; j < rows; j++) {
+        int[] planes = j < rowsOpenFrom ? planeOf : boundaryPlanes(kh);
         int lead = pairs ? previous[po + j] * states : 0;
         int emitted = emit + (pairs ? j * stride : 0);
         int cell = here + j * row;
@@ -180,13 +242,13 @@ public final class Decoder {
           double top = Double.NEGATIVE_INFINITY;
           int arg = 0;
           for (int h = 0; h < kh; h++) {
-            double s = prevScore[prev + h * predStep + j] + transition[planeOf[h] + last] + emissions[emitted + h * emitByPred + k];
+            double s = prevScore[prev + h * predStep + j] + transition[planes[h] + last] + emissions[emitted + h * emitByPred + k];
             if (s > top) {
               top = s;
               arg = h;
             }
           }
-          score[cell + k] = top;
+          score[cell + k] = k < opensFrom ? top : top + openingLog[co + k];
           backPointer[cell + k] = arg;
         }
       }
@@ -194,12 +256,14 @@ public final class Decoder {
     int last = trellis.start(n - 1);
     int lastRows = pairs ? trellis.count(n - 2) : 1;
     int lastRow = trellis.stride(n - 1);
+    int lastOpensFrom = trellis.openingFrom(n - 1);
     double top = Double.NEGATIVE_INFINITY;
     int argJ = 0;
     int argK = 0;
     for (int j = 0; j < lastRows; j++) {
-      int lead = pairs ? trellis.stateAt(n - 2, j) * states * states : 0;
       for (int k = 0; k < trellis.count(n - 1); k++) {
+        // a last candidate that opens a sentence ends a sentence of one token
+        int lead = pairs ? (k < lastOpensFrom ? trellis.stateAt(n - 2, j) : boundary) * states * states : 0;
         double s = score[last + j * lastRow + k] + transition[lead + trellis.stateAt(n - 1, k) * states + boundary];
         if (s > top) {
           top = s;
@@ -354,12 +418,17 @@ public final class Decoder {
       int emit = trellis.emissionStart(i);
       int stride = trellis.emissionStride(i);
       int kc = trellis.count(i);
+      int opensFrom = trellis.openingFrom(i);
+      int co = lattice.candidateOffset(i);
       double sum = 0;
       for (int k = 0; k < kc; k++) {
-        int tk = trellis.stateAt(i, k);
+        int tk = trellis.enteredAt(i, k);
         double a = 0;
         for (int j = 0; j < kp; j++) {
           a += (i == 0 ? 1 : alpha[prev + j]) * bigram[trellis.stateAt(i - 1, j) * states + tk] * scaledEmission[emit + j * stride + k];
+        }
+        if (k >= opensFrom) {
+          a *= openingWeight[co + k];
         }
         alpha[here + k] = a;
         sum += a;
@@ -382,12 +451,18 @@ public final class Decoder {
       int emit = trellis.emissionStart(i + 1);
       int stride = trellis.emissionStride(i + 1);
       int kn = trellis.count(i + 1);
+      int nextOpensFrom = trellis.openingFrom(i + 1);
+      int nextOffset = lattice.candidateOffset(i + 1);
       sum = 0;
       for (int j = 0; j < trellis.count(i); j++) {
         int tj = trellis.stateAt(i, j);
         double b = 0;
         for (int k = 0; k < kn; k++) {
-          b += bigram[tj * states + trellis.stateAt(i + 1, k)] * scaledEmission[emit + j * stride + k] * beta[next + k];
+          double t = bigram[tj * states + trellis.enteredAt(i + 1, k)];
+          if (k >= nextOpensFrom) {
+            t *= openingWeight[nextOffset + k];
+          }
+          b += t * scaledEmission[emit + j * stride + k] * beta[next + k];
         }
         beta[here + j] = b;
         sum += b;
@@ -417,16 +492,24 @@ public final class Decoder {
       int row = trellis.stride(i);
       int emit = trellis.emissionStart(i);
       int stride = trellis.emissionStride(i);
+      int opensFrom = trellis.openingFrom(i);
+      int rowsOpenFrom = trellis.openingFrom(i - 1);
+      int co = lattice.candidateOffset(i);
       double sum = 0;
       for (int j = 0; j < kp; j++) {
         int tj = trellis.stateAt(i - 1, j);
+        boolean afterOpening = j >= rowsOpenFrom;
         for (int k = 0; k < kc; k++) {
-          int tk = trellis.stateAt(i, k);
+          int tk = trellis.enteredAt(i, k);
           double a = 0;
           for (int h = 0; h < kpp; h++) {
-            a += (i == 0 ? 1 : alpha[prev + h * prevRow + j]) * trigram[(trellis.stateAt(i - 2, h) * states + tj) * states + tk];
+            int th = afterOpening ? boundary : trellis.stateAt(i - 2, h);
+            a += (i == 0 ? 1 : alpha[prev + h * prevRow + j]) * trigram[(th * states + tj) * states + tk];
           }
           a *= scaledEmission[emit + j * stride + k];
+          if (k >= opensFrom) {
+            a *= openingWeight[co + k];
+          }
           alpha[here + j * row + k] = a;
           sum += a;
         }
@@ -437,11 +520,13 @@ public final class Decoder {
     int kc = trellis.count(n - 1);
     int last = trellis.start(n - 1);
     int lastRow = trellis.stride(n - 1);
+    int lastOpensFrom = trellis.openingFrom(n - 1);
     double end = 0;
     double sum = 0;
     for (int j = 0; j < kp; j++) {
       for (int k = 0; k < kc; k++) {
-        double b = trigram[(trellis.stateAt(n - 2, j) * states + trellis.stateAt(n - 1, k)) * states + boundary];
+        int tj = k < lastOpensFrom ? trellis.stateAt(n - 2, j) : boundary;
+        double b = trigram[(tj * states + trellis.stateAt(n - 1, k)) * states + boundary];
         beta[last + j * lastRow + k] = b;
         end += alpha[last + j * lastRow + k] * b;
         sum += b;
@@ -459,14 +544,21 @@ public final class Decoder {
       int nextRow = trellis.stride(i + 1);
       int emit = trellis.emissionStart(i + 1);
       int stride = trellis.emissionStride(i + 1);
+      int opensFrom = trellis.openingFrom(i);
+      int nextOpensFrom = trellis.openingFrom(i + 1);
+      int nextOffset = lattice.candidateOffset(i + 1);
       sum = 0;
       for (int h = 0; h < kh; h++) {
         int th = trellis.stateAt(i - 1, h);
         for (int j = 0; j < kj; j++) {
-          int base = (th * states + trellis.stateAt(i, j)) * states;
+          int base = ((j < opensFrom ? th : boundary) * states + trellis.stateAt(i, j)) * states;
           double b = 0;
           for (int k = 0; k < kk; k++) {
-            b += trigram[base + trellis.stateAt(i + 1, k)] * scaledEmission[emit + j * stride + k] * beta[next + j * nextRow + k];
+            double t = trigram[base + trellis.enteredAt(i + 1, k)];
+            if (k >= nextOpensFrom) {
+              t *= openingWeight[nextOffset + k];
+            }
+            b += t * scaledEmission[emit + j * stride + k] * beta[next + j * nextRow + k];
           }
           beta[here + h * row + j] = b;
           sum += b;

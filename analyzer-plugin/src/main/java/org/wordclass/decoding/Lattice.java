@@ -16,6 +16,12 @@ import org.wordclass.model.UnknownWordModel;
  * position also records how its candidates were chosen ({@link #source}) and, for unknown words,
  * the length of the ending the suffix model matched: two stores per token, for explanations.
  *
+ * <p>With {@link SentenceBoundaries#DECODED}, a capitalised token after the first also gets the
+ * candidates of its first-word reading (the states and emissions it would get first in a
+ * sentence: not capitalised, looked up in lower case where a first word is), after its own:
+ * candidates {@code k >= openingFrom(i)} open a sentence, and the decoder enters them through the
+ * end of the sentence before. Their context emissions are those after the sentence start.
+ *
  * <p>Filled token by token from char buffers and reused across sequences, so steady-state
  * decoding allocates nothing. Not thread-safe: one per decoding thread.
  */
@@ -27,7 +33,10 @@ public final class Lattice {
   private final double[] unknownScores;
   /** {@link #unknownPlan} for lower-case (0) and capitalised (1) unknown words. */
   private final int[][] unknownPlan;
+  private final SentenceBoundaries boundaries;
   private int size;
+  /** Number of positions with a first-word reading. */
+  private int openings;
   private int[] candidateStart = new int[65];
   private int[] candidateState = new int[256];
   private double[] candidateLogEmission = new double[256];
@@ -35,8 +44,16 @@ public final class Lattice {
   private int[] wordId = new int[64];
   private byte[] source = new byte[64];
   private short[] endingLength = new short[64];
+  /** Per position, the index of its first candidate that opens a sentence; its candidate count if none. */
+  private int[] openingFrom = new int[64];
+  /** Per position, the word and source of its first-word reading, where it has one. */
+  private int[] openingWordId = new int[64];
+  private byte[] openingSource = new byte[64];
   /** Whether the last {@link #lookup} found the word only in lower case. */
   private boolean foundLowerCased;
+  /** The word and source of the last {@link #addReading}. */
+  private int readingWord;
+  private byte readingSource;
   private int[] pairStart = new int[65];
   /** Per position: its number of candidates if its emissions depend on the previous candidate, else 0. */
   private int[] pairStride = new int[64];
@@ -44,8 +61,14 @@ public final class Lattice {
   private int[] contextRowOf = new int[32];
   private double[] plainOf = new double[32];
 
+  /** A lattice of the sequence's own sentence, as training and most tools decode. */
   public Lattice(HmmModel model) {
+    this(model, SentenceBoundaries.TOKENIZER);
+  }
+
+  public Lattice(HmmModel model, SentenceBoundaries boundaries) {
     this.model = model;
+    this.boundaries = boundaries;
     this.states = model.states();
     this.splitsByCapital = states.uses(StateSpace.CAPITALISED);
     int open = model.unknownWords().openTagCount();
@@ -58,9 +81,14 @@ public final class Lattice {
     return model;
   }
 
+  public SentenceBoundaries boundaries() {
+    return boundaries;
+  }
+
   /** Empties the lattice, keeping its buffers. */
   public void clear() {
     size = 0;
+    openings = 0;
   }
 
   /** Number of tokens. */
@@ -82,20 +110,37 @@ public final class Lattice {
    */
   public void add(char[] buf, int off, int len, int tag) {
     ensureTokenCapacity(size + 1);
-    int flags = splitsByCapital && size > 0 && Spelling.startsWithCapital(buf, off, len) ? StateSpace.CAPITALISED : 0;
-    int word = lookup(buf, off, len);
-    wordId[size] = word;
     int start = candidateStart[size];
     endingLength[size] = 0;
-    source[size] = (byte) sourceOf(word).ordinal();
-    int end = word >= 0 ? addKnown(word, flags, tag, start) : addUnknown(buf, off, len, flags, tag, start);
+    int end = addReading(buf, off, len, tag, size == 0, start);
     if (end == start) {
       throw new IllegalArgumentException("'" + new String(buf, off, len) + "' cannot take "
           + (tag < 0 ? "any state of the model" : "tag " + model.tags().name(tag)));
     }
+    wordId[size] = readingWord;
+    source[size] = readingSource;
+    openingFrom[size] = end - start;
+    if (boundaries == SentenceBoundaries.DECODED && size > 0 && tag < 0 && Spelling.startsWithCapital(buf, off, len)) {
+      end = addReading(buf, off, len, tag, true, end);
+      openingWordId[size] = readingWord;
+      openingSource[size] = readingSource;
+      openings++;
+    }
     candidateStart[size + 1] = end;
     size++;
     fillPairEmissions(size - 1);
+  }
+
+  /**
+   * Appends from {@code start} the candidates of the token read as the first word of a sentence
+   * or not; returns the end. Sets {@link #readingWord} and {@link #readingSource}.
+   */
+  private int addReading(char[] buf, int off, int len, int tag, boolean first, int start) {
+    int flags = splitsByCapital && !first && Spelling.startsWithCapital(buf, off, len) ? StateSpace.CAPITALISED : 0;
+    int word = lookup(buf, off, len, first);
+    readingWord = word;
+    readingSource = (byte) sourceOf(word).ordinal();
+    return word >= 0 ? addKnown(word, flags, tag, start) : addUnknown(buf, off, len, flags, tag, start);
   }
 
   /** Appends a token given as a String. */
@@ -127,11 +172,11 @@ public final class Lattice {
    * The word's id; a capitalised first word missing from the lexicon, or (a cue of its own) known
    * only from mid-sentence, is looked up in lower case, and keeps its own entry if that fails.
    */
-  private int lookup(char[] buf, int off, int len) {
+  private int lookup(char[] buf, int off, int len, boolean first) {
     Lexicon lexicon = model.lexicon();
     int word = lexicon.lookup(buf, off, len);
     foundLowerCased = false;
-    if (size == 0 && Spelling.startsWithCapital(buf, off, len) && lowerCaseFirst(word)) {
+    if (first && Spelling.startsWithCapital(buf, off, len) && lowerCaseFirst(word)) {
       int lower = lexicon.lookupLowerCased(buf, off, len);
       foundLowerCased = lower >= 0;
       word = foundLowerCased ? lower : word;
@@ -234,8 +279,8 @@ public final class Lattice {
    */
   private void fillPairEmissions(int position) {
     int here = candidateCount(position);
-    int word = wordId[position];
-    boolean contexts = word >= 0 && model.lexicon().hasContexts(word);
+    int from = openingFrom[position];
+    boolean contexts = hasContexts(wordId[position]) || from < here && hasContexts(openingWordId[position]);
     int previous = contexts && position > 0 ? candidateCount(position - 1) : 1;
     int start = pairStart[position];
     int end = start + previous * here;
@@ -253,11 +298,16 @@ public final class Lattice {
       int previousState = position == 0 ? model.boundary() : candidateState(position - 1, j);
       int row = start + j * here;
       for (int k = 0; k < here; k++) {
+        // a first-word reading follows the start of its sentence, whatever stands before it
         int context = contextRowOf[k];
-        float c = context < 0 ? Float.NaN : model.lexicon().contextLogEmissionInRow(context, previousState);
+        float c = context < 0 ? Float.NaN : model.lexicon().contextLogEmissionInRow(context, k < from ? previousState : model.boundary());
         pairLogEmission[row + k] = Float.isNaN(c) ? plainOf[k] : c;
       }
     }
+  }
+
+  private boolean hasContexts(int word) {
+    return word >= 0 && model.lexicon().hasContexts(word);
   }
 
   /**
@@ -270,12 +320,13 @@ public final class Lattice {
       contextRowOf = new int[Math.max(here, 2 * contextRowOf.length)];
       plainOf = new double[contextRowOf.length];
     }
-    int word = wordId[position];
     double unseen = model.cues().unseenContextLogWeight();
     int first = candidateStart[position];
     for (int k = 0; k < here; k++) {
-      contextRowOf[k] = model.lexicon().contextRow(word, candidateEntry[first + k]);
-      plainOf[k] = candidateLogEmission[first + k] + unseen;
+      int word = k < openingFrom[position] ? wordId[position] : openingWordId[position];
+      boolean contexts = hasContexts(word);
+      contextRowOf[k] = contexts ? model.lexicon().contextRow(word, candidateEntry[first + k]) : -1;
+      plainOf[k] = candidateLogEmission[first + k] + (contexts ? unseen : 0);
     }
   }
 
@@ -320,14 +371,42 @@ public final class Lattice {
     return candidateEntry[candidateStart[position] + k];
   }
 
-  /** Whether the token at {@code position} is in the model's lexicon. */
+  /** Whether the token at {@code position} is in the model's lexicon (as read in mid-sentence, where it has a first-word reading too). */
   public boolean isKnown(int position) {
     return wordId[position] >= 0;
   }
 
-  /** How the candidates of the token at {@code position} were chosen. */
+  /** Whether the {@code k}-th candidate of {@code position}'s reading is in the model's lexicon. */
+  public boolean isKnown(int position, int k) {
+    return wordId(position, k) >= 0;
+  }
+
+  /** How the candidates of the token at {@code position} were chosen (those of its mid-sentence reading, where it has two). */
   public CandidateSource source(int position) {
     return CandidateSource.of(source[position]);
+  }
+
+  /** How the {@code k}-th candidate of {@code position} was chosen: the source of its reading. */
+  public CandidateSource source(int position, int k) {
+    return CandidateSource.of(opensSentence(position, k) ? openingSource[position] : source[position]);
+  }
+
+  /**
+   * The index of the first candidate of {@code position} that reads it as the first word of a
+   * sentence ({@link SentenceBoundaries#DECODED}); its candidate count if it has no such reading.
+   */
+  public int openingFrom(int position) {
+    return openingFrom[position];
+  }
+
+  /** Whether the {@code k}-th candidate of {@code position} opens a sentence. */
+  public boolean opensSentence(int position, int k) {
+    return k >= openingFrom[position];
+  }
+
+  /** Number of positions with a first-word reading, those that may open a sentence. */
+  public int openings() {
+    return openings;
   }
 
   /**
@@ -338,9 +417,14 @@ public final class Lattice {
     return endingLength[position];
   }
 
-  /** Lexicon id of the token at {@code position}, or -1 if it is unknown. */
+  /** Lexicon id of the token at {@code position}, or -1 if it is unknown (its mid-sentence reading, where it has two). */
   public int wordId(int position) {
     return wordId[position];
+  }
+
+  /** Lexicon id of the reading of the {@code k}-th candidate of {@code position}, or -1 if unknown. */
+  public int wordId(int position, int k) {
+    return opensSentence(position, k) ? openingWordId[position] : wordId[position];
   }
 
   /** First index of the candidates of {@code position} in the flat candidate arrays. */
@@ -390,6 +474,9 @@ public final class Lattice {
       pairStride = Arrays.copyOf(pairStride, grown);
       wordId = Arrays.copyOf(wordId, grown);
       source = Arrays.copyOf(source, grown);
+      openingFrom = Arrays.copyOf(openingFrom, grown);
+      openingWordId = Arrays.copyOf(openingWordId, grown);
+      openingSource = Arrays.copyOf(openingSource, grown);
       endingLength = Arrays.copyOf(endingLength, grown);
     }
   }

@@ -6,20 +6,31 @@ import org.wordclass.model.HmmModel;
 /**
  * Tags whole token sequences given as Strings: the convenient entry point for tools, tests and
  * evaluation. The analysis filter uses {@link Decoder} directly on char buffers instead, and says
- * why each token got its class through {@code WordClassExplanationAttribute}.
+ * why each token got its class through {@code WordClassExplanationAttribute}. Both decode through
+ * the same {@link Decoder}, sentence boundaries inside a sequence included ({@link
+ * SentenceBoundaries}).
  *
  * <p>Not thread-safe: one per thread.
  */
 public final class Tagger {
-  /** Tags of one sequence, with the posterior probability of each chosen tag (NaN if not computed). */
-  public record Tagging(int[] tags, double[] confidences, boolean[] known) {}
+  /**
+   * Tags of one sequence, with the posterior probability of each chosen tag (NaN if not computed),
+   * whether each token was known in the reading chosen, and whether it was found to open a
+   * sentence (never for the first token, nor with {@link SentenceBoundaries#TOKENIZER}).
+   */
+  public record Tagging(int[] tags, double[] confidences, boolean[] known, boolean[] opensSentence) {}
 
   private final Decoder decoder;
   private final RunPositions positions;
   private int[] best = new int[64];
 
+  /** A tagger of each sequence as one sentence. */
   public Tagger(HmmModel model) {
-    this(new Decoder(model));
+    this(model, SentenceBoundaries.TOKENIZER);
+  }
+
+  public Tagger(HmmModel model, SentenceBoundaries boundaries) {
+    this(new Decoder(model, model.order(), boundaries));
   }
 
   public Tagger(Decoder decoder) {
@@ -66,13 +77,15 @@ public final class Tagger {
     int[] tokenTags = new int[count];
     double[] confidences = new double[count];
     boolean[] known = new boolean[count];
+    boolean[] opens = new boolean[count];
     for (int t = 0; t < count; t++) {
       int i = positions.positionOf(t);
       tokenTags[t] = tags[i];
       confidences[t] = withConfidence ? decoder.tagPosterior(i, best[i]) : Double.NaN;
-      known[t] = lattice.isKnown(i);
+      known[t] = lattice.isKnown(i, best[i]);
+      opens[t] = lattice.opensSentence(i, best[i]) && (t == 0 || positions.positionOf(t - 1) != i);
     }
-    return new Tagging(tokenTags, confidences, known);
+    return new Tagging(tokenTags, confidences, known, opens);
   }
 
   /** Tag names of {@code tokens}. */

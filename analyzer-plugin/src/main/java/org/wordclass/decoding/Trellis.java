@@ -96,6 +96,22 @@ final class Trellis {
     return position < 0 ? 0 : lattice.candidateOffset(position);
   }
 
+  /**
+   * The first candidate of {@code position} that opens a sentence ({@link Lattice#openingFrom});
+   * its candidate count, none, for the virtual positions.
+   */
+  int openingFrom(int position) {
+    return position < 0 ? 1 : lattice.openingFrom(position);
+  }
+
+  /**
+   * The state a transition into candidate {@code k} of {@code position} leads to: its own, or the
+   * boundary for a candidate that opens a sentence (entered through the end of the one before).
+   */
+  int enteredAt(int position, int k) {
+    return k >= openingFrom(position) ? boundaryState[0] : stateAt(position, k);
+  }
+
   /** The state of candidate {@code k}, or the boundary before the sentence. */
   int stateAt(int position, int k) {
     return position < 0 ? boundaryState[0] : lattice.candidateState(position, k);

@@ -148,6 +148,29 @@ public class TestWordClassExplanation extends BaseTokenStreamTestCase {
     }
   }
 
+  /**
+   * An invented imperative after a sentence without a full stop (UD tags imperatives VERB; common
+   * practice): the explanation says the decoder opened a sentence there, and only there.
+   */
+  public void testExplanationSaysWhereTheDecoderOpenedASentence() throws IOException {
+    String text = "The kettle is broken again Start the coffee machine instead";
+    List<Boolean> opens = new ArrayList<>();
+    Tokenizer tokenizer = new WhitespaceTokenizer();
+    tokenizer.setReader(new StringReader(text));
+    try (TokenStream stream = new WordClassFilter(tokenizer, explaining(BUNDLED))) {
+      WordClassExplanationAttribute why = stream.getAttribute(WordClassExplanationAttribute.class);
+      stream.reset();
+      while (stream.incrementToken()) {
+        opens.add(why.opensSentence());
+      }
+      stream.end();
+    }
+    List<Boolean> expected = new ArrayList<>(java.util.Collections.nCopies(10, false));
+    expected.set(5, true);
+    assertEquals(expected, opens);
+    assertEquals("VERB", explain(text, explaining(BUNDLED)).get(5).wordClass());
+  }
+
   public void testAttributeClearCopyCloneEqualsReflection() {
     WordClassExplanationAttributeImpl att = new WordClassExplanationAttributeImpl();
     assertNull(att.getSource());
@@ -156,6 +179,7 @@ public class TestWordClassExplanation extends BaseTokenStreamTestCase {
     assertEquals(empty, att);
 
     att.setSource(CandidateSource.UNKNOWN, null, "oth", WordShape.LOWER);
+    att.setOpensSentence(true);
     double[] p = att.classProbabilities(3);
     p[0] = 0.25;
     p[2] = 0.75;
@@ -176,6 +200,7 @@ public class TestWordClassExplanation extends BaseTokenStreamTestCase {
     expected.put("lookedUpAs", null);
     expected.put("ending", "oth");
     expected.put("shape", WordShape.LOWER);
+    expected.put("opensSentence", true);
     expected.put("classProbabilities", List.of(0.5, 0.0, 0.75));
     assertEquals(expected, seen);
 

@@ -19,6 +19,7 @@ import org.apache.lucene.tests.analysis.CannedTokenStream;
 import org.apache.lucene.tests.analysis.Token;
 import org.apache.lucene.tests.analysis.MockTokenizer;
 import org.apache.lucene.util.BytesRef;
+import org.wordclass.decoding.SentenceBoundaries;
 import org.wordclass.decoding.Tagger;
 import org.wordclass.model.DefaultModel;
 import org.wordclass.model.HmmModel;
@@ -199,12 +200,38 @@ public class TestWordClassFilter extends BaseTokenStreamTestCase {
       "Zorblat quickly glimped the frobnicated Wexton !",
       "Ana fixes the chain while Tom tests the brakes",
     };
-    for (int order = 1; order <= 2; order++) {
-      Tagger tagger = new Tagger(new org.wordclass.decoding.Decoder(DefaultModel.get(), order));
-      for (String sentence : sentences) {
-        List<String> tokens = words(sentence);
-        assertEquals(sentence, Arrays.asList(tagger.tagNames(tokens)), types(tag(sentence, defaults().withOrder(order))));
+    for (SentenceBoundaries boundaries : SentenceBoundaries.values()) {
+      for (int order = 1; order <= 2; order++) {
+        Tagger tagger = new Tagger(new org.wordclass.decoding.Decoder(DefaultModel.get(), order, boundaries));
+        for (String sentence : sentences) {
+          List<String> tokens = words(sentence);
+          assertEquals(sentence + ", " + boundaries, Arrays.asList(tagger.tagNames(tokens)),
+              types(tag(sentence, defaults().withOrder(order).withBoundaries(boundaries))));
+        }
       }
+    }
+  }
+
+  /**
+   * Two invented sentences in one field without a full stop between them, the second opening with
+   * an imperative, which UD tags VERB (UD guidelines, common practice): in mid-sentence the
+   * capitalised word is read as a noun; with decoded boundaries it opens a sentence.
+   */
+  public void testDecodedBoundaryBeforeAnImperative() throws IOException {
+    String text = "The kettle is broken again Start the coffee machine instead";
+    String[] terms = text.split(" ");
+    assertEquals(List.of("DET", "NOUN", "AUX", "VERB", "ADV", "VERB", "DET", "NOUN", "NOUN", "ADV"), types(tag(text, defaults())));
+    List<String> off = types(tag(text, defaults().withBoundaries(SentenceBoundaries.TOKENIZER)));
+    assertEquals("without decoded boundaries Start is read in mid-sentence", "NOUN", off.get(5));
+    try (Analyzer a = new Analyzer() {
+          @Override
+          protected TokenStreamComponents createComponents(String fieldName) {
+            Tokenizer tokenizer = new SentenceStandardTokenizer();
+            return new TokenStreamComponents(tokenizer, new WordClassFilter(tokenizer, defaults()));
+          }
+        }) {
+      // the JDK's sentence rules find no boundary here, so the filter's decoding has to
+      assertAnalyzesTo(a, text, terms, new String[] {"DET", "NOUN", "AUX", "VERB", "ADV", "VERB", "DET", "NOUN", "NOUN", "ADV"});
     }
   }
 
@@ -212,7 +239,7 @@ public class TestWordClassFilter extends BaseTokenStreamTestCase {
   public void testWindowCutDecodesEachWindowAlone() throws IOException {
     String text = "Our club cooks a big stew every Friday and everyone brings bread and the stew needs a slow cook";
     List<String> tokens = words(text);
-    Tagger tagger = new Tagger(DefaultModel.get());
+    Tagger tagger = new Tagger(DefaultModel.get(), WordClassOptions.DEFAULT_BOUNDARIES);
     for (int window : new int[] {1, 2, 3, 5, 7, tokens.size() - 1, tokens.size(), 512, Integer.MAX_VALUE}) {
       List<String> expected = new ArrayList<>();
       for (int from = 0; from < tokens.size(); from += window) {
@@ -227,7 +254,7 @@ public class TestWordClassFilter extends BaseTokenStreamTestCase {
     String text = "They book a table . I read a good book . We ride through the park every Sunday .";
     List<List<String>> sentences = List.of(
         words("They book a table ."), words("I read a good book ."), words("We ride through the park every Sunday ."));
-    Tagger tagger = new Tagger(DefaultModel.get());
+    Tagger tagger = new Tagger(DefaultModel.get(), WordClassOptions.DEFAULT_BOUNDARIES);
     for (int window : new int[] {512, 4, 1}) {
       List<String> expected = new ArrayList<>();
       for (List<String> sentence : sentences) {
@@ -289,6 +316,23 @@ public class TestWordClassFilter extends BaseTokenStreamTestCase {
     }
   }
 
+  /** Random text with decoded boundaries at every capitalised token, explanations and confidences on (Lucene's random checks: offsets, positions, reuse, threads). */
+  public void testRandomStringsWithDecodedBoundaries() throws IOException {
+    WordClassOptions options = randomOptions().withBoundaries(SentenceBoundaries.DECODED).withConfidence(true).withExplain(true);
+    try (Analyzer a = mockAnalyzer(options)) {
+      checkRandomData(random(), a, 1000 * RANDOM_MULTIPLIER);
+    }
+    try (Analyzer a = new Analyzer() {
+          @Override
+          protected TokenStreamComponents createComponents(String fieldName) {
+            Tokenizer tokenizer = new SentenceStandardTokenizer();
+            return new TokenStreamComponents(tokenizer, new WordClassFilter(tokenizer, options));
+          }
+        }) {
+      checkRandomData(random(), a, 500 * RANDOM_MULTIPLIER, 200);
+    }
+  }
+
   public void testRandomLongStrings() throws IOException {
     WordClassOptions options = randomOptions().withConfidence(random().nextBoolean()).withQualifiedTerms(true);
     try (Analyzer a = mockAnalyzer(options)) {
@@ -320,6 +364,7 @@ public class TestWordClassFilter extends BaseTokenStreamTestCase {
   private static WordClassOptions randomOptions() {
     WordClassOptions options = defaults().withOrder(random().nextBoolean() ? 1 : 2);
     options = options.withPayload(PayloadEncoding.values()[random().nextInt(PayloadEncoding.values().length)]);
+    options = options.withBoundaries(SentenceBoundaries.values()[random().nextInt(SentenceBoundaries.values().length)]);
     return options.withMaxWindow(random().nextBoolean() ? 1 + random().nextInt(8) : WordClassOptions.DEFAULT_MAX_WINDOW);
   }
 

@@ -13,6 +13,7 @@ import org.apache.lucene.tests.analysis.BaseTokenStreamTestCase;
 import org.apache.lucene.tests.analysis.MockTokenizer;
 import org.apache.lucene.util.ClasspathResourceLoader;
 import org.apache.lucene.util.ResourceLoader;
+import org.wordclass.decoding.SentenceBoundaries;
 import org.wordclass.model.DefaultModel;
 import org.wordclass.model.HmmModel;
 import org.wordclass.model.ModelFormatException;
@@ -74,6 +75,8 @@ public class TestWordClassFilterFactory extends BaseTokenStreamTestCase {
     assertEquals(1.5f, options.weights().weight(model.tags().indexOf("VERB")), 0f);
     assertEquals(0.5f, options.weights().weight(model.tags().indexOf("DET")), 0f);
     assertEquals(model.order(), informed(CLASSPATH).options().order());
+    assertEquals(SentenceBoundaries.DECODED, informed(CLASSPATH).options().boundaries());
+    assertEquals(SentenceBoundaries.TOKENIZER, informed(CLASSPATH, "boundaries", "tokenizer").options().boundaries());
   }
 
   /** {@code language=} picks a model of the pack shipped in the jar (see docs/languages.md). */
@@ -152,6 +155,8 @@ public class TestWordClassFilterFactory extends BaseTokenStreamTestCase {
     assertRejected("'maxWindow'", "maxWindow", "0");
     assertRejected("'maxWindow'", "maxWindow", "many");
     assertRejected("'separator'", "separator", "");
+    assertRejected("'boundaries'", "boundaries", "sentences");
+    assertRejected("'boundaries'", "boundaries", "Decoded");
     assertRejected("'weights'", "payload", "weight", "weights", "NOUN=2");
     assertRejected("'weights'", "payload", "weight", "weights", "NOUN:heavy");
     assertRejected("'weights'", "payload", "weight", "weights", "NOUN:2,NOUN:3");

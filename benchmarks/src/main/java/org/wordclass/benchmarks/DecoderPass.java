@@ -5,11 +5,14 @@ import java.lang.management.ThreadMXBean;
 import java.util.List;
 import org.wordclass.decoding.Decoder;
 import org.wordclass.decoding.Lattice;
+import org.wordclass.decoding.SentenceBoundaries;
 import org.wordclass.model.DefaultModel;
 
 /**
  * One pass of the decoder workload over the EWT test sentences with the bundled model at order 2
- * (or the order named by {@code -Dwordclass.order}), timed in CPU time of the running thread and split into filling the lattices and filling them
+ * (or the order named by {@code -Dwordclass.order}; sentence boundaries as {@code
+ * -Dwordclass.boundaries} names them, {@code tokenizer} by default, builds from the one that added
+ * it), timed in CPU time of the running thread and split into filling the lattices and filling them
  * plus Viterbi. {@link SideBySide} loads this class from each build it compares, each in a class
  * loader of its own, so that every build decodes with its own code and its own bundled model.
  */
@@ -26,7 +29,8 @@ public final class DecoderPass {
   public static void prepare() {
     sentences = Ewt.testTokens();
     // order 2 is the default; -Dwordclass.order=1 measures the first-order kernel
-    decoder = new Decoder(DefaultModel.get(), Integer.getInteger("wordclass.order", 2));
+    decoder = new Decoder(DefaultModel.get(), Integer.getInteger("wordclass.order", 2),
+        SentenceBoundaries.parse(System.getProperty("wordclass.boundaries", "tokenizer"), "wordclass.boundaries"));
     best = new int[sentences.stream().mapToInt(s -> s.length).max().orElse(0)];
     tokens = Ewt.tokenCount(sentences);
   }

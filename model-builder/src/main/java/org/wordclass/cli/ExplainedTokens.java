@@ -31,9 +31,11 @@ final class ExplainedTokens {
    * @param lookedUpAs for LOWERCASED_FIRST_WORD, the lower-case form found in the lexicon
    * @param ending for UNKNOWN, the ending the suffix model matched (may be empty)
    * @param shape for UNKNOWN, the spelling shape whose ending counts scored it
+   * @param opensSentence whether the decoder found that the token opens a sentence the tokenizer
+   *     did not mark
    */
   record Token(String token, int start, int end, String wordClass, double confidence, String source, String lookedUpAs,
-      String ending, Integer endingLength, String shape, List<Alternative> alternatives) {}
+      String ending, Integer endingLength, String shape, boolean opensSentence, List<Alternative> alternatives) {}
 
   private ExplainedTokens() {}
 
@@ -42,7 +44,7 @@ final class ExplainedTokens {
     String ending = why.getEnding();
     return new Token(token, start, end, tags.name(classIndex), confidence, why.getSource().name(), why.getLookedUpAs(), ending,
         ending == null ? null : ending.length(), why.getShape() == null ? null : why.getShape().name(),
-        alternatives(classIndex, why, tags));
+        why.opensSentence(), alternatives(classIndex, why, tags));
   }
 
   /** The most probable classes other than the chosen one, most probable first. */
@@ -91,7 +93,7 @@ final class ExplainedTokens {
   }
 
   private static String how(Token t) {
-    return switch (CandidateSource.valueOf(t.source())) {
+    return (t.opensSentence() ? "opens a sentence, " : "") + switch (CandidateSource.valueOf(t.source())) {
       case KNOWN -> "known";
       case LOWERCASED_FIRST_WORD -> "known as '" + t.lookedUpAs() + "' (first word, lower-cased)";
       case USER_LEXICON -> "user lexicon";

@@ -5,6 +5,7 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import org.wordclass.corpus.Sentence;
+import org.wordclass.decoding.SentenceBoundaries;
 import org.wordclass.decoding.Tagger;
 import org.wordclass.model.HmmModel;
 
@@ -30,9 +31,15 @@ public final class Evaluation {
   private long candidates;
   private long nanos;
 
+  /** Scores each sentence decoded as one. */
   public Evaluation(HmmModel model) {
+    this(model, SentenceBoundaries.TOKENIZER);
+  }
+
+  /** Scores each sentence decoded with {@code boundaries}: as one, or with the boundaries the model finds inside it. */
+  public Evaluation(HmmModel model, SentenceBoundaries boundaries) {
     this.model = model;
-    this.tagger = new Tagger(model);
+    this.tagger = new Tagger(model, boundaries);
     for (String tag : model.tags().names()) {
       label(tag);
     }

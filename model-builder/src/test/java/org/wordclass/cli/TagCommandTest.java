@@ -186,6 +186,29 @@ class TagCommandTest {
     assertEquals(expected, fromJson);
   }
 
+  /**
+   * An invented imperative after a sentence without a full stop (UD tags imperatives VERB; common
+   * practice): {@code tag} decodes the boundary as the filter does by default, says so in {@code
+   * --explain} and {@code --json}, and {@code --boundaries tokenizer} reads the word in mid-sentence.
+   */
+  @Test
+  void decodedBoundaryShownAndSwitchable() throws Exception {
+    String text = "The kettle is broken again Start the coffee machine instead";
+    String start = Cli.run("tag", "--explain", text).out().lines().filter(l -> l.startsWith("Start\t")).findFirst().orElseThrow();
+    assertEquals("VERB", start.split("\t")[3], start);
+    assertTrue(start.contains("opens a sentence"), start);
+    JsonNode tokens = JSON.readTree(Cli.run("tag", "--json", text).out()).get("sentences").get(0).get("tokens");
+    for (JsonNode t : tokens) {
+      assertEquals(t.get("token").asText().equals("Start"), t.get("opensSentence").asBoolean(), t::toString);
+    }
+    String off = Cli.run("tag", "--boundaries", "tokenizer", "--explain", text).out().lines()
+        .filter(l -> l.startsWith("Start\t")).findFirst().orElseThrow();
+    assertEquals("NOUN", off.split("\t")[3], off);
+    assertFalse(off.contains("opens a sentence"), off);
+    Cli.Result bad = Cli.run("tag", "--boundaries", "sentences", text);
+    assertTrue(bad.exitCode() != 0 && bad.err().contains("--boundaries"), bad::toString);
+  }
+
   /** A blank line where the tokenizer starts a new sentence: here at a full stop and at a line break. */
   @Test
   void aBlankLineBetweenSentences() {

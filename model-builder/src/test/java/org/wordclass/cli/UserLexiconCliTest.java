@@ -140,7 +140,7 @@ class UserLexiconCliTest {
     JsonNode sentences = report.get("sentences");
     assertEquals(2, sentences.size());
     Set<String> expectedKeys = Set.of("token", "start", "end", "wordClass", "confidence", "source", "lookedUpAs", "ending",
-        "endingLength", "shape", "alternatives");
+        "endingLength", "shape", "opensSentence", "alternatives");
     for (JsonNode sentence : sentences) {
       for (JsonNode token : sentence.get("tokens")) {
         assertEquals(expectedKeys, fieldNames(token), token::toString);
