@@ -5,7 +5,6 @@ import java.nio.file.Path;
 import org.wordclass.corpus.Corpus;
 import java.util.function.Consumer;
 import org.wordclass.corpus.Sentence;
-import org.wordclass.decoding.SentenceBoundaries;
 import org.wordclass.evaluation.Evaluation;
 import org.wordclass.evaluation.EvaluationReport;
 import org.wordclass.model.HmmModel;
@@ -27,12 +26,8 @@ final class EvaluateCommand extends BaseCommand {
   @Mixin
   AnalyzerOptions analysis;
 
-  @Option(names = "--boundaries", paramLabel = "WHERE", converter = BoundariesConverter.class,
-      defaultValue = "decoded",
-      description = "tokenizer: decode each sentence (each piece the chain's tokenizer marks) as one; decoded: let "
-          + "the decoder find sentence boundaries inside it as well, before capitalised tokens, as the filter's "
-          + "boundaries argument does. Default: ${DEFAULT-VALUE}.")
-  SentenceBoundaries boundaries;
+  @Mixin
+  BoundariesOption boundaries;
 
   @Option(names = "--report", paramLabel = "FILE", description = "Also write the figures as JSON.")
   Path json;
@@ -51,8 +46,8 @@ final class EvaluateCommand extends BaseCommand {
     HmmModel loaded = model.load();
     Corpus input = corpus.open(Provenance.scoringColumn(loaded, model.name(), corpus.tags, "--tags"));
     Progress progress = Progress.start("evaluate", input, 1, err());
-    Evaluation evaluation = new Evaluation(loaded, boundaries);
-    Evaluation onGoldTokens = new Evaluation(loaded, boundaries);
+    Evaluation evaluation = new Evaluation(loaded, boundaries.value());
+    Evaluation onGoldTokens = new Evaluation(loaded, boundaries.value());
     try {
       Consumer<Sentence> analyzed = analysis.feeding(evaluation::add);
       progress.read(input, analysis.enabled ? s -> {

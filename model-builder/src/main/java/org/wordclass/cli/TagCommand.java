@@ -20,7 +20,6 @@ import org.wordclass.analysis.WordClassAttribute;
 import org.wordclass.analysis.WordClassExplanationAttribute;
 import org.wordclass.analysis.WordClassOptions;
 import org.wordclass.corpus.StrictUtf8Reader;
-import org.wordclass.decoding.SentenceBoundaries;
 import org.wordclass.model.DefaultModel;
 import org.wordclass.model.HmmModel;
 import org.wordclass.model.ModelFile;
@@ -81,12 +80,8 @@ final class TagCommand extends BaseCommand {
       description = "Print what --explain prints as one JSON document, for tools (implies --explain).")
   boolean json;
 
-  @Option(names = "--boundaries", paramLabel = "WHERE", converter = BoundariesConverter.class,
-      defaultValue = "decoded",
-      description = "The filter's boundaries argument: tokenizer decodes each sentence the tokenizer marks as one; "
-          + "decoded lets the decoder find sentence boundaries it missed, before capitalised tokens. "
-          + "Default: ${DEFAULT-VALUE}.")
-  SentenceBoundaries boundaries;
+  @Mixin
+  BoundariesOption boundaries;
 
   @Option(names = "--text", paramLabel = "FILE",
       description = "A UTF-8 text file to tag instead of arguments or standard input.")
@@ -109,7 +104,7 @@ final class TagCommand extends BaseCommand {
     HmmModel loaded = lexicon.applyTo(loadModel());
     boolean explained = explain || json;
     WordClassOptions options = WordClassOptions.of(loaded).withConfidence(confidence || explained).withExplain(explained)
-        .withBoundaries(boundaries);
+        .withBoundaries(boundaries.value());
     // the picocli writer flushes at every line; one flush at the end costs a system call instead of one per token
     Writer buffered = new BufferedWriter(out(), 1 << 16);
     try (Analyzer analyzer = chain.chain().buildWithWordClass(options);
