@@ -1,7 +1,9 @@
 package org.wordclass.cli;
 
 import java.lang.reflect.Field;
+import java.util.Arrays;
 import java.util.Locale;
+import java.util.stream.Collectors;
 import org.wordclass.model.EndingAlphabet;
 import org.wordclass.training.TrainingOptions;
 import picocli.CommandLine.IDefaultValueProvider;
@@ -135,32 +137,34 @@ final class TrainingOptionsMixin {
 
   /** Reads an alphabet's name as {@link TrainingOptions#describe()} writes it. */
   private EndingAlphabet endingAlphabet(String value) {
-    for (EndingAlphabet alphabet : EndingAlphabet.values()) {
-      if (value.equalsIgnoreCase(alphabet.optionName())) {
-        return alphabet;
-      }
-    }
-    throw new ParameterException(mixee.commandLine(),
-        "Invalid value for --ending-alphabet: '" + value + "' is not one of " + java.util.Arrays.stream(
-            EndingAlphabet.values()).map(EndingAlphabet::optionName).collect(java.util.stream.Collectors.joining(", ")));
+    return named("--ending-alphabet", value, EndingAlphabet.values());
   }
 
   /** Reads a prior's name as {@link TrainingOptions#describe()} writes it. */
   private TrainingOptions.UnknownWordPrior unknownWordPrior(String value) {
-    for (TrainingOptions.UnknownWordPrior prior : TrainingOptions.UnknownWordPrior.values()) {
-      if (value.equalsIgnoreCase(prior.name().replace('_', '-'))) {
-        return prior;
+    return named("--unknown-word-prior", value, TrainingOptions.UnknownWordPrior.values());
+  }
+
+  /** The value of {@code values} whose option name ({@link #optionName}) is {@code value}, in any case. */
+  private <E extends Enum<E>> E named(String option, String value, E[] values) {
+    for (E e : values) {
+      if (value.equalsIgnoreCase(optionName(e))) {
+        return e;
       }
     }
-    throw new ParameterException(mixee.commandLine(),
-        "Invalid value for --unknown-word-prior: '" + value
-            + "' is not one of tag, state, lower-case-state, rare-tag, rare-state");
+    throw new ParameterException(mixee.commandLine(), "Invalid value for " + option + ": '" + value
+        + "' is not one of " + Arrays.stream(values).map(TrainingOptionsMixin::optionName).collect(Collectors.joining(", ")));
+  }
+
+  /** How an option value names a constant: lower case, words joined by hyphens ({@code lower-case-state}). */
+  private static String optionName(Enum<?> constant) {
+    return constant.name().toLowerCase(Locale.ROOT).replace('_', '-');
   }
 
   /** Reads a rule name or a number. */
   private TrainingOptions withSuffixWeight(TrainingOptions options, String value) {
     for (TrainingOptions.SuffixWeightRule rule : TrainingOptions.SuffixWeightRule.values()) {
-      if (rule != TrainingOptions.SuffixWeightRule.FIXED && value.equalsIgnoreCase(rule.name().replace('_', '-'))) {
+      if (rule != TrainingOptions.SuffixWeightRule.FIXED && value.equalsIgnoreCase(optionName(rule))) {
         return options.withSuffixWeightRule(rule);
       }
     }
