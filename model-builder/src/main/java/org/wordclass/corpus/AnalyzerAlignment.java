@@ -234,8 +234,7 @@ public final class AnalyzerAlignment {
         leansOnNext.add(AnalyzerAlignment.leansOnNext(sentence, w));
       }
       wordCount += sentence.size();
-      boolean[] spaces = sentence.spaceAfter();
-      spaceBefore = spaces.length == 0 || spaces[spaces.length - 1];
+      spaceBefore = sentence.spaceAfterLast();
     }
 
     int start(int word) {

@@ -56,6 +56,14 @@ public record Sentence(
     return words.size();
   }
 
+  /**
+   * Whether running text puts a space after this sentence, before the next one: unless its last
+   * word has {@code SpaceAfter=No}.
+   */
+  public boolean spaceAfterLast() {
+    return spaceAfter.length == 0 || spaceAfter[spaceAfter.length - 1];
+  }
+
   /** Per token its gap before (see {@link #gaps}), as a list; null when the sentence has no run. */
   public List<String> gapList() {
     return gaps == null ? null : Arrays.asList(gaps);

@@ -73,8 +73,7 @@ public final class SentenceBreakComparison {
         inner.add(text.length());
       }
       text.append(s.text());
-      boolean[] spaces = s.spaceAfter();
-      space = spaces.length == 0 || spaces[spaces.length - 1];
+      space = s.spaceAfterLast();
     }
     return text.toString();
   }
