@@ -54,6 +54,10 @@ public final class Lattice {
   /** The word and source of the last {@link #addReading}. */
   private int readingWord;
   private byte readingSource;
+  /** The token's own lexicon id (-1: unknown), looked up once for both of its readings. */
+  private int ownWord;
+  /** Whether {@link #unknownScores} already hold the token's scores: they depend on its characters only, not on its reading. */
+  private boolean unknownScored;
   private int[] pairStart = new int[65];
   /** Per position: its number of candidates if its emissions depend on the previous candidate, else 0. */
   private int[] pairStride = new int[64];
@@ -112,6 +116,8 @@ public final class Lattice {
     ensureTokenCapacity(size + 1);
     int start = candidateStart[size];
     endingLength[size] = 0;
+    ownWord = model.lexicon().lookup(buf, off, len);
+    unknownScored = false;
     int end = addReading(buf, off, len, tag, size == 0, start);
     if (end == start) {
       throw new IllegalArgumentException("'" + new String(buf, off, len) + "' cannot take "
@@ -174,7 +180,7 @@ public final class Lattice {
    */
   private int lookup(char[] buf, int off, int len, boolean first) {
     Lexicon lexicon = model.lexicon();
-    int word = lexicon.lookup(buf, off, len);
+    int word = ownWord;
     foundLowerCased = false;
     if (first && Spelling.startsWithCapital(buf, off, len) && lowerCaseFirst(word)) {
       int lower = lexicon.lookupLowerCased(buf, off, len);
@@ -223,7 +229,10 @@ public final class Lattice {
 
   private int addUnknown(char[] buf, int off, int len, int flags, int tag, int start) {
     UnknownWordModel unknown = model.unknownWords();
-    endingLength[size] = (short) unknown.logEmissions(buf, off, len, unknownScratch, unknownScores);
+    if (!unknownScored) {
+      endingLength[size] = (short) unknown.logEmissions(buf, off, len, unknownScratch, unknownScores);
+      unknownScored = true;
+    }
     if (tag < 0) {
       int[] plan = unknownPlan[flags == 0 ? 0 : 1];
       int count = plan.length / 2;
